@@ -92,7 +92,7 @@ planItem
     : STEP expr                                                # stepItem
     | HORIZON expr                                             # horizonItem
     | MINIMIZE objectiveTerm ('+' objectiveTerm)*              # minimizeItem
-    | CLUSTERS expr name?                                      # clustersItem
+    | CLUSTERS simpleValue name?                               # clustersItem
     | CLOSED_LOOP MAX expr                                     # closedLoopItem
     | SOLVER name solverOption*                                # solverItem
     | GUARD onOff                                              # guardItem
@@ -101,10 +101,11 @@ planItem
     ;
 
 objectiveTerm
-    : weight? (TIME | FUEL)
+    : simpleValue? (TIME | FUEL)
     ;
 
-weight
+// A value that cannot swallow the word after it as a unit: `clusters 2 ordered`, `0.1 fuel`.
+simpleValue
     : NUMBER
     | name
     | '(' expr ')'

@@ -1,0 +1,488 @@
+package dev.skerry.compiler.check;
+
+import dev.skerry.compiler.ast.Decl;
+import dev.skerry.compiler.ast.Name;
+import dev.skerry.compiler.ast.PlanProp;
+import dev.skerry.compiler.ast.ScenarioFile;
+import dev.skerry.compiler.ast.VehicleProp;
+import dev.skerry.compiler.diag.Code;
+import dev.skerry.compiler.diag.Diagnostic;
+import dev.skerry.compiler.diag.Diagnostics;
+import dev.skerry.compiler.model.Area;
+import dev.skerry.compiler.model.PlanOptions;
+import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Target;
+import dev.skerry.compiler.model.Vec2;
+import dev.skerry.compiler.model.Vehicle;
+import dev.skerry.compiler.model.Waypoint;
+import dev.skerry.compiler.model.Zone;
+import dev.skerry.compiler.source.SourceFile;
+import dev.skerry.compiler.source.SourceRange;
+import dev.skerry.compiler.units.Dim;
+import dev.skerry.compiler.units.Quantity;
+import dev.skerry.compiler.units.Unit;
+import dev.skerry.compiler.units.Units;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The resolve/check stage: declares every name, evaluates constants and quantities in SI, builds
+ * the immutable {@link Scenario}, and reports everything wrong on the way. The scenario is null
+ * when an error leaves it incomplete.
+ */
+final class Checker {
+  /** Longest horizon accepted: beyond this the MILP is far past what any solver finishes. */
+  static final int MAX_HORIZON = 2000;
+
+  private final Diagnostics sink;
+  private final SymbolTable symbols = new SymbolTable();
+  private final Evaluator eval;
+  private final Shapes shapes;
+  private final Map<SourceFile, Units> unitsByFile = new HashMap<>();
+
+  Checker(Diagnostics sink) {
+    this.sink = sink;
+    this.eval = new Evaluator(symbols, sink);
+    this.shapes = new Shapes(eval, sink);
+  }
+
+  SymbolTable symbols() {
+    return symbols;
+  }
+
+  /** Where each plan option is written, so hints can point at the line to change. */
+  private final Map<String, SourceRange> planRanges = new HashMap<>();
+
+  Map<String, SourceRange> planRanges() {
+    return planRanges;
+  }
+
+  Scenario check(ScenarioFile main, List<Includes.Placed> decls) {
+    declareAll(decls);
+    for (Includes.Placed p : decls) {
+      if (p.decl() instanceof Decl.UnitsDecl u) {
+        units(p.file().source(), u);
+      }
+    }
+    String name = null;
+    List<Vehicle> vehicles = new ArrayList<>();
+    List<Area> areas = new ArrayList<>();
+    List<Zone> zones = new ArrayList<>();
+    List<Target> targets = new ArrayList<>();
+    List<Waypoint> waypoints = new ArrayList<>();
+    PlanOptions plan = null;
+    Decl.PlanDecl planDecl = null;
+    boolean complete = true;
+    for (Includes.Placed p : decls) {
+      Units units = unitsOf(p.file().source());
+      Decl decl = p.decl();
+      if (decl instanceof Decl.Header h) {
+        if (name != null) {
+          sink.report(Code.DUPLICATE_DECLARATION, h.range(), "the scenario is named twice");
+        }
+        name = h.name().text();
+      } else if (decl instanceof Decl.ConstDecl c) {
+        Quantity q = eval.eval(c.value(), units);
+        if (q != null) {
+          eval.defineConstant(c.name().text(), q);
+        }
+      } else if (decl instanceof Decl.VehicleDecl v) {
+        complete &= add(vehicles, vehicle(v, units));
+      } else if (decl instanceof Decl.AreaDecl a) {
+        Shape shape = shapes.shape(a.shape(), units, "area `" + a.name().text() + "`");
+        complete &= add(areas, shape == null ? null : new Area(a.name().text(), shape, a.name().range()));
+        if (areas.size() > 1) {
+          sink.report(Code.DUPLICATE_DECLARATION, a.range(), "the scenario has one keep-in area; `"
+              + areas.get(0).name() + "` is already declared", related("the first area", areas.get(0).range()));
+        }
+      } else if (decl instanceof Decl.ZoneDecl z) {
+        Shape shape = shapes.shape(z.shape(), units, "zone `" + z.name().text() + "`");
+        complete &= add(zones, shape == null ? null : new Zone(z.name().text(), shape, z.name().range()));
+      } else if (decl instanceof Decl.TargetDecl t) {
+        Shape shape = shapes.shape(t.shape(), units, "target `" + t.name().text() + "`");
+        complete &= add(targets, shape == null ? null : new Target(t.name().text(), shape, t.atRest(), t.name().range()));
+      } else if (decl instanceof Decl.WaypointDecl w) {
+        complete &= add(waypoints, waypoint(w, units));
+      } else if (decl instanceof Decl.PlanDecl pd) {
+        if (planDecl != null) {
+          sink.report(Code.DUPLICATE_DECLARATION, pd.range(), "the scenario has one plan block; merge the two",
+              related("the first plan block", planDecl.range()));
+        } else {
+          planDecl = pd;
+        }
+      }
+    }
+    SourceRange top = new SourceRange(main.source(), 0, 0);
+    if (planDecl != null) {
+      plan = plan(planDecl, unitsOf(main.source()), zones.size());
+      complete &= plan != null;
+    } else {
+      sink.report(Code.MISSING_DECLARATION, top, "the scenario has no `plan { ... }` block (it needs at least `step` and `horizon`)");
+      complete = false;
+    }
+    complete &= require(vehicles.isEmpty(), top, "the scenario has no vehicle: add `vehicle name { start (x, y) ... }`");
+    complete &= require(areas.isEmpty(), top, "the scenario has no keep-in area: add `area name box (x, y) to (x, y)`");
+    complete &= require(targets.isEmpty(), top, "the scenario has no target: add `target name box (x, y) to (x, y)`");
+    if (vehicles.size() > 1) {
+      sink.report(Code.UNSUPPORTED, vehicles.get(1).range(), "this version plans for one vehicle; remove `"
+          + vehicles.get(1).name() + "` or plan it in its own scenario");
+      complete = false;
+    }
+    if (targets.size() > 1) {
+      sink.report(Code.UNSUPPORTED, targets.get(1).range(), "this version plans to one target; remove `"
+          + targets.get(1).name() + "` or make it a waypoint");
+      complete = false;
+    }
+    if (!complete || sink.hasErrors()) {
+      return null;
+    }
+    int sides = planSides;
+    List<Vehicle> withSides = new ArrayList<>();
+    for (Vehicle v : vehicles) {
+      withSides.add(v.sides() > 0 ? v : new Vehicle(v.name(), v.dynamics(), v.start(), v.startVelocity(), v.maxSpeed(),
+          v.maxAccel(), v.radius(), sides, v.range()));
+    }
+    return new Scenario(name == null ? fileStem(main.source()) : name, withSides, areas.get(0), zones, targets,
+        waypoints, plan);
+  }
+
+  private int planSides = Vehicle.DEFAULT_SIDES;
+
+  private static String fileStem(SourceFile source) {
+    String n = source.path() == null ? source.displayName() : source.path().getFileName().toString();
+    int dot = n.lastIndexOf('.');
+    return dot > 0 ? n.substring(0, dot) : n;
+  }
+
+  private boolean require(boolean missing, SourceRange at, String message) {
+    if (missing) {
+      sink.report(Code.MISSING_DECLARATION, at, message);
+    }
+    return !missing;
+  }
+
+  private static <T> boolean add(List<T> list, T item) {
+    if (item == null) {
+      return false;
+    }
+    list.add(item);
+    return true;
+  }
+
+  static Diagnostic.Related related(String message, SourceRange range) {
+    return new Diagnostic.Related(message, range);
+  }
+
+  private void declareAll(List<Includes.Placed> decls) {
+    for (Includes.Placed p : decls) {
+      Symbol.Kind kind = kindOf(p.decl());
+      if (kind == null) {
+        continue;
+      }
+      Name name = p.decl().name();
+      Symbol earlier = symbols.declare(new Symbol(kind, name, p.decl()));
+      if (earlier != null) {
+        sink.report(Code.DUPLICATE_NAME, name.range(), "`" + name.text() + "` is already declared as a "
+            + earlier.kind().word() + "; every name is declared once", related("the first declaration", earlier.name().range()));
+      }
+    }
+  }
+
+  static Symbol.Kind kindOf(Decl decl) {
+    if (decl instanceof Decl.ConstDecl) {
+      return Symbol.Kind.CONSTANT;
+    } else if (decl instanceof Decl.VehicleDecl) {
+      return Symbol.Kind.VEHICLE;
+    } else if (decl instanceof Decl.AreaDecl) {
+      return Symbol.Kind.AREA;
+    } else if (decl instanceof Decl.ZoneDecl) {
+      return Symbol.Kind.ZONE;
+    } else if (decl instanceof Decl.TargetDecl) {
+      return Symbol.Kind.TARGET;
+    } else if (decl instanceof Decl.WaypointDecl) {
+      return Symbol.Kind.WAYPOINT;
+    }
+    return null;
+  }
+
+  private final Map<SourceFile, Decl.UnitsDecl> unitsDecls = new HashMap<>();
+
+  private void units(SourceFile file, Decl.UnitsDecl decl) {
+    Decl.UnitsDecl earlier = unitsDecls.putIfAbsent(file, decl);
+    if (earlier != null) {
+      sink.report(Code.DUPLICATE_DECLARATION, decl.range(), "this file already sets its units",
+          related("the first `units` line", earlier.range()));
+      return;
+    }
+    Units units = Units.si();
+    for (Name n : decl.units()) {
+      Unit unit = Units.lookup(n.text());
+      if (unit == null) {
+        sink.report(Code.UNKNOWN_UNIT, n.range(), "unknown unit `" + n.text() + "`");
+        continue;
+      }
+      Units changed = units.withDefault(unit);
+      if (changed == null) {
+        sink.report(Code.UNIT_MISMATCH, n.range(), "`units` sets the length and time units for bare numbers; `"
+            + n.text() + "` is " + unit.dim().describe());
+        continue;
+      }
+      units = changed;
+    }
+    unitsByFile.put(file, units);
+  }
+
+  private Units unitsOf(SourceFile file) {
+    return unitsByFile.getOrDefault(file, Units.si());
+  }
+
+  private Vehicle vehicle(Decl.VehicleDecl decl, Units units) {
+    Map<String, VehicleProp> seen = new HashMap<>();
+    for (VehicleProp prop : decl.props()) {
+      VehicleProp earlier = seen.putIfAbsent(prop.keyword(), prop);
+      if (earlier != null) {
+        sink.report(Code.DUPLICATE_PROPERTY, prop.range(), "`" + prop.keyword() + "` is given twice for vehicle `"
+            + decl.name().text() + "`", related("the first one", earlier.range()));
+      }
+    }
+    String what = "vehicle `" + decl.name().text() + "`";
+    boolean ok = true;
+    for (String needed : List.of("start", "speed", "accel")) {
+      if (!seen.containsKey(needed)) {
+        String example = needed.equals("start") ? "start (0, 0) at rest"
+            : needed.equals("speed") ? "speed max 3 m/s" : "accel max 1 m/s^2";
+        sink.report(Code.MISSING_PROPERTY, decl.name().range(), what + " needs `" + needed + "` (e.g. `" + example + "`)");
+        ok = false;
+      }
+    }
+    Vehicle.Dynamics dynamics = Vehicle.Dynamics.DOUBLE_INTEGRATOR;
+    Vec2 start = null;
+    Vec2 velocity = Vec2.ZERO;
+    Double speed = null;
+    Double accel = null;
+    double radius = 0;
+    int sides = 0;
+    for (VehicleProp prop : seen.values()) {
+      if (prop instanceof VehicleProp.Dynamics d) {
+        if (!d.model().text().equals(Vehicle.Dynamics.DOUBLE_INTEGRATOR.keyword())) {
+          sink.report(Code.UNKNOWN_OPTION, d.model().range(), "unknown dynamics `" + d.model().text()
+              + "`; this version knows `double_integrator`");
+          ok = false;
+        }
+      } else if (prop instanceof VehicleProp.Start s) {
+        start = eval.point(s.position(), Dim.LENGTH, units, "the start of " + what);
+        ok &= start != null;
+        if (s.motion() instanceof VehicleProp.Motion.VelocityVector vv) {
+          velocity = eval.point(vv.velocity(), Dim.SPEED, units, "the start velocity of " + what);
+          ok &= velocity != null;
+        } else if (s.motion() instanceof VehicleProp.Motion.SpeedHeading sh) {
+          Double v = eval.expect(sh.speed(), Dim.SPEED, units, "the start speed");
+          Double heading = eval.expect(sh.heading(), Dim.ANGLE, units, "the heading");
+          if (v == null || heading == null) {
+            ok = false;
+          } else {
+            // Heading as a compass bearing: 0 = +y (north), 90 deg = +x (east).
+            velocity = new Vec2(v * Math.sin(heading), v * Math.cos(heading));
+          }
+        }
+      } else if (prop instanceof VehicleProp.Speed s) {
+        speed = positive(eval.expect(s.max(), Dim.SPEED, units, "the speed limit"), s.max().range(), "the speed limit");
+        ok &= speed != null;
+      } else if (prop instanceof VehicleProp.Accel a) {
+        accel = positive(eval.expect(a.max(), Dim.ACCEL, units, "the acceleration limit"), a.max().range(),
+            "the acceleration limit");
+        ok &= accel != null;
+      } else if (prop instanceof VehicleProp.Radius r) {
+        Double value = eval.expect(r.value(), Dim.LENGTH, units, "the radius");
+        if (value != null && value < 0) {
+          sink.report(Code.VALUE_OUT_OF_RANGE, r.value().range(), "the radius cannot be negative");
+          value = null;
+        }
+        ok &= value != null;
+        radius = value == null ? 0 : value;
+      } else if (prop instanceof VehicleProp.Sides s) {
+        Integer count = eval.expectCount(s.count(), units, "the number of sides", 3, 64);
+        ok &= count != null;
+        sides = count == null ? 0 : count;
+      }
+    }
+    if (!ok) {
+      return null;
+    }
+    if (velocity.norm() > speed * (1 + 1e-9)) {
+      VehicleProp s = seen.get("start");
+      sink.report(Code.START_TOO_FAST, s.range(), what + " starts at " + Format.number(velocity.norm())
+          + " m/s, above its speed limit of " + Format.number(speed) + " m/s");
+    }
+    return new Vehicle(decl.name().text(), dynamics, start, velocity, speed, accel, radius, sides, decl.name().range());
+  }
+
+  private Double positive(Double value, SourceRange range, String what) {
+    if (value != null && !(value > 0)) {
+      sink.report(Code.VALUE_OUT_OF_RANGE, range, what + " must be greater than zero");
+      return null;
+    }
+    return value;
+  }
+
+  private Waypoint waypoint(Decl.WaypointDecl w, Units units) {
+    String what = "waypoint `" + w.name().text() + "`";
+    Vec2 p = eval.point(w.point(), Dim.LENGTH, units, what);
+    Double tolerance = positive(eval.expect(w.tolerance(), Dim.LENGTH, units, "the tolerance"), w.tolerance().range(),
+        "the tolerance");
+    return p == null || tolerance == null ? null : new Waypoint(w.name().text(), p, tolerance, w.name().range());
+  }
+
+  private PlanOptions plan(Decl.PlanDecl decl, Units units, int zoneCount) {
+    Map<String, PlanProp> seen = new HashMap<>();
+    for (PlanProp prop : decl.props()) {
+      PlanProp earlier = seen.putIfAbsent(prop.keyword(), prop);
+      planRanges.putIfAbsent(prop.keyword(), prop.range());
+      if (earlier != null) {
+        sink.report(Code.DUPLICATE_PROPERTY, prop.range(), "`" + prop.keyword() + "` is given twice in the plan",
+            related("the first one", earlier.range()));
+      }
+    }
+    SourceRange planKeyword = new SourceRange(decl.range().source(), decl.range().start(), decl.range().start() + 4);
+    boolean ok = true;
+    if (!seen.containsKey("step")) {
+      sink.report(Code.MISSING_PROPERTY, planKeyword, "the plan needs `step` (the time step, e.g. `step 1 s`)");
+      ok = false;
+    }
+    if (!seen.containsKey("horizon")) {
+      sink.report(Code.MISSING_PROPERTY, planKeyword, "the plan needs `horizon` (a number of steps, e.g. `horizon 40`)");
+      ok = false;
+    }
+    Double step = null;
+    if (seen.get("step") instanceof PlanProp.Step s) {
+      step = positive(eval.expect(s.value(), Dim.TIME, units, "the step"), s.value().range(), "the step");
+      ok &= step != null;
+    }
+    int horizon = 0;
+    if (seen.get("horizon") instanceof PlanProp.Horizon h && step != null) {
+      Quantity q = eval.eval(h.value(), units);
+      if (q == null) {
+        ok = false;
+      } else if (!q.bare() && q.dim().equals(Dim.TIME)) {
+        horizon = (int) Math.min(Integer.MAX_VALUE, Math.ceil(q.value() / step - 1e-9));
+        if (horizon < 1 || horizon > MAX_HORIZON) {
+          sink.report(Code.VALUE_OUT_OF_RANGE, h.value().range(), "the horizon must be from 1 to " + MAX_HORIZON
+              + " steps; this is " + horizon);
+          ok = false;
+        }
+      } else {
+        Integer n = eval.expectCount(h.value(), units, "the horizon (a number of steps, or a time)", 1, MAX_HORIZON);
+        ok &= n != null;
+        horizon = n == null ? 0 : n;
+      }
+    }
+    double timeWeight = 1;
+    double fuelWeight = 0;
+    if (seen.get("minimize") instanceof PlanProp.Minimize m) {
+      timeWeight = 0;
+      for (PlanProp.Term t : m.terms()) {
+        double w = 1;
+        if (t.weight() != null) {
+          Double value = eval.expect(t.weight(), Dim.NONE, units, "a weight");
+          if (value == null || value < 0) {
+            if (value != null) {
+              sink.report(Code.VALUE_OUT_OF_RANGE, t.weight().range(), "weights cannot be negative");
+            }
+            ok = false;
+            continue;
+          }
+          w = value;
+        }
+        if (t.what().equals("time")) {
+          timeWeight += w;
+        } else {
+          fuelWeight += w;
+        }
+      }
+      if (ok && timeWeight == 0 && fuelWeight == 0) {
+        sink.report(Code.VALUE_OUT_OF_RANGE, m.range(), "the objective has only zero weights; give time or fuel a weight");
+        ok = false;
+      }
+    }
+    int clusters = 0;
+    PlanOptions.SymmetryRule rule = PlanOptions.SymmetryRule.ORDERED;
+    if (seen.get("clusters") instanceof PlanProp.Clusters c) {
+      Integer n = eval.expectCount(c.count(), units, "the number of clusters", 0, 1_000_000);
+      if (n == null) {
+        ok = false;
+      } else if (n > 0 && (n > zoneCount || zoneCount == 0)) {
+        sink.report(Code.CLUSTERS_OUT_OF_RANGE, c.count().range(), zoneCount == 0
+            ? "there are no zones to cluster; remove `clusters`"
+            : "the scenario has " + zoneCount + " zones, so at most " + zoneCount + " clusters (" + n + " asked)");
+        ok = false;
+      } else {
+        clusters = n;
+      }
+      if (c.rule() != null) {
+        rule = PlanOptions.SymmetryRule.fromKeyword(c.rule().text());
+        if (rule == null) {
+          sink.report(Code.UNKNOWN_OPTION, c.rule().range(), "unknown symmetry rule `" + c.rule().text()
+              + "`; choose `none`, `ordered` or `sorted`");
+          ok = false;
+        }
+      }
+    }
+    int closedLoop = horizon * 4;
+    if (seen.get("closed_loop") instanceof PlanProp.ClosedLoop cl) {
+      Integer n = eval.expectCount(cl.max(), units, "the closed-loop limit", 1, 100_000);
+      ok &= n != null;
+      closedLoop = n == null ? 0 : n;
+    }
+    String solver = PlanOptions.DEFAULT_SOLVER;
+    Duration timeLimit = null;
+    double gap = 1e-4;
+    int threads = 0;
+    if (seen.get("solver") instanceof PlanProp.Solver s) {
+      solver = s.engine().text();
+      if (!SOLVERS.contains(solver)) {
+        sink.report(Code.UNKNOWN_OPTION, s.engine().range(), "unknown solver `" + solver + "`; choose one of "
+            + String.join(", ", SOLVERS));
+        ok = false;
+      }
+      if (s.timeLimit() != null) {
+        Double t = positive(eval.expect(s.timeLimit(), Dim.TIME, units, "the time limit"), s.timeLimit().range(),
+            "the time limit");
+        ok &= t != null;
+        timeLimit = t == null ? null : Duration.ofNanos((long) Math.min(Long.MAX_VALUE, t * 1e9));
+      }
+      if (s.gap() != null) {
+        Double g = eval.expect(s.gap(), Dim.NONE, units, "the gap");
+        if (g != null && (g < 0 || g >= 1)) {
+          sink.report(Code.VALUE_OUT_OF_RANGE, s.gap().range(), "the gap is a fraction from 0 to 1, e.g. `0.5 %` or `0.005`");
+          g = null;
+        }
+        ok &= g != null;
+        gap = g == null ? gap : g;
+      }
+      if (s.threads() != null) {
+        Integer n = eval.expectCount(s.threads(), units, "the number of threads", 0, 256);
+        ok &= n != null;
+        threads = n == null ? 0 : n;
+      }
+    }
+    boolean guard = !(seen.get("guard") instanceof PlanProp.Guard g) || g.on();
+    boolean pruning = !(seen.get("pruning") instanceof PlanProp.Pruning p) || p.on();
+    if (seen.get("sides") instanceof PlanProp.Sides s) {
+      Integer n = eval.expectCount(s.count(), units, "the number of sides", 3, 64);
+      ok &= n != null;
+      planSides = n == null ? planSides : n;
+    }
+    if (!ok) {
+      return null;
+    }
+    return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, rule, closedLoop, solver, timeLimit, gap,
+        threads, guard, pruning, decl.range());
+  }
+
+  /** Solver names the plan block accepts (the solve stage maps them to backends). */
+  static final List<String> SOLVERS = List.of("default", "ojalgo", "scip", "cbc", "highs", "cpsat");
+}

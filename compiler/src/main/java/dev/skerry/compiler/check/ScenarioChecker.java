@@ -1,0 +1,35 @@
+package dev.skerry.compiler.check;
+
+import dev.skerry.compiler.ast.ScenarioFile;
+import dev.skerry.compiler.diag.Diagnostics;
+import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.source.SourceFile;
+import dev.skerry.compiler.syntax.ScenarioReader;
+
+/**
+ * The front end in one call: read the text, expand includes, resolve and check, and (when the
+ * scenario is complete) compute the feasibility hints. Used by {@code skerry check}, every later
+ * command and the language server. Never throws on bad input.
+ */
+public final class ScenarioChecker {
+  private ScenarioChecker() {}
+
+  public static CheckResult check(SourceFile main, SourceLoader loader) {
+    Diagnostics sink = new Diagnostics();
+    ScenarioFile file = ScenarioReader.read(main, sink);
+    Includes.Expansion expansion = Includes.expand(file, loader, sink);
+    Checker checker = new Checker(sink);
+    Scenario scenario = null;
+    try {
+      scenario = checker.check(file, expansion.decls());
+      if (scenario != null) {
+        Hints.report(scenario, sink, checker.planRanges());
+      }
+    } catch (StackOverflowError e) {
+      sink.report(dev.skerry.compiler.diag.Code.NESTING_TOO_DEEP, new dev.skerry.compiler.source.SourceRange(main, 0, 0),
+          "an expression is too deeply nested to evaluate; simplify it");
+      scenario = null;
+    }
+    return new CheckResult(expansion.files(), checker.symbols(), scenario, sink.sorted());
+  }
+}
