@@ -117,16 +117,24 @@ final class Checker {
       }
     }
     SourceRange top = new SourceRange(main.source(), 0, 0);
+    // A declaration that is written but broken was reported already; only absent ones are missing.
+    boolean unreadable = sink.hasCode(Code.FILE_TOO_LARGE) || sink.hasCode(Code.NESTING_TOO_DEEP);
+    boolean hasVehicle = unreadable || decls.stream().anyMatch(p -> p.decl() instanceof Decl.VehicleDecl);
+    boolean hasArea = unreadable || decls.stream().anyMatch(p -> p.decl() instanceof Decl.AreaDecl);
+    boolean hasTarget = unreadable || decls.stream().anyMatch(p -> p.decl() instanceof Decl.TargetDecl);
     if (planDecl != null) {
       plan = plan(planDecl, unitsOf(main.source()), zones.size());
       complete &= plan != null;
+    } else if (unreadable) {
+      complete = false;
     } else {
       sink.report(Code.MISSING_DECLARATION, top, "the scenario has no `plan { ... }` block (it needs at least `step` and `horizon`)");
       complete = false;
     }
-    complete &= require(vehicles.isEmpty(), top, "the scenario has no vehicle: add `vehicle name { start (x, y) ... }`");
-    complete &= require(areas.isEmpty(), top, "the scenario has no keep-in area: add `area name box (x, y) to (x, y)`");
-    complete &= require(targets.isEmpty(), top, "the scenario has no target: add `target name box (x, y) to (x, y)`");
+    complete &= !vehicles.isEmpty() && !areas.isEmpty() && !targets.isEmpty();
+    require(!hasVehicle, top, "the scenario has no vehicle: add `vehicle name { start (x, y) ... }`");
+    require(!hasArea, top, "the scenario has no keep-in area: add `area name box (x, y) to (x, y)`");
+    require(!hasTarget, top, "the scenario has no target: add `target name box (x, y) to (x, y)`");
     if (vehicles.size() > 1) {
       sink.report(Code.UNSUPPORTED, vehicles.get(1).range(), "this version plans for one vehicle; remove `"
           + vehicles.get(1).name() + "` or plan it in its own scenario");
@@ -251,12 +259,16 @@ final class Checker {
     }
     String what = "vehicle `" + decl.name().text() + "`";
     boolean ok = true;
+    boolean brokenText = sink.hasWithin(Code.SYNTAX_ERROR, decl.range());
     for (String needed : List.of("start", "speed", "accel")) {
-      if (!seen.containsKey(needed)) {
+      if (seen.containsKey(needed)) {
+        continue;
+      }
+      ok = false;
+      if (!brokenText) {
         String example = needed.equals("start") ? "start (0, 0) at rest"
             : needed.equals("speed") ? "speed max 3 m/s" : "accel max 1 m/s^2";
         sink.report(Code.MISSING_PROPERTY, decl.name().range(), what + " needs `" + needed + "` (e.g. `" + example + "`)");
-        ok = false;
       }
     }
     Vehicle.Dynamics dynamics = Vehicle.Dynamics.DOUBLE_INTEGRATOR;
@@ -348,12 +360,12 @@ final class Checker {
       }
     }
     SourceRange planKeyword = new SourceRange(decl.range().source(), decl.range().start(), decl.range().start() + 4);
-    boolean ok = true;
-    if (!seen.containsKey("step")) {
+    boolean ok = !sink.hasWithin(Code.SYNTAX_ERROR, decl.range());
+    if (!seen.containsKey("step") && ok) {
       sink.report(Code.MISSING_PROPERTY, planKeyword, "the plan needs `step` (the time step, e.g. `step 1 s`)");
       ok = false;
     }
-    if (!seen.containsKey("horizon")) {
+    if (!seen.containsKey("horizon") && !sink.hasWithin(Code.SYNTAX_ERROR, decl.range())) {
       sink.report(Code.MISSING_PROPERTY, planKeyword, "the plan needs `horizon` (a number of steps, e.g. `horizon 40`)");
       ok = false;
     }
@@ -417,7 +429,8 @@ final class Checker {
       } else if (n > 0 && (n > zoneCount || zoneCount == 0)) {
         sink.report(Code.CLUSTERS_OUT_OF_RANGE, c.count().range(), zoneCount == 0
             ? "there are no zones to cluster; remove `clusters`"
-            : "the scenario has " + zoneCount + " zones, so at most " + zoneCount + " clusters (" + n + " asked)");
+            : "the scenario has " + zoneCount + (zoneCount == 1 ? " zone, so at most 1 cluster" : " zones, so at most "
+                + zoneCount + " clusters") + " (" + n + " asked)");
         ok = false;
       } else {
         clusters = n;

@@ -24,7 +24,10 @@ public final class DiskLoader implements SourceLoader {
 
   @Override
   public SourceFile load(Path file) throws IOException {
-    return SourceFile.of(file, readText(file));
+    Path cwd = Path.of("").toAbsolutePath();
+    Path abs = file.toAbsolutePath().normalize();
+    String shown = abs.startsWith(cwd) ? cwd.relativize(abs).toString() : abs.toString();
+    return new SourceFile(abs, shown, readText(file));
   }
 
   /** Reads a file as text, refusing (with a message) files far beyond what the reader accepts. */

@@ -29,6 +29,16 @@ public final class Diagnostics {
     return items.stream().anyMatch(Diagnostic::isError);
   }
 
+  /** True when an error with this code was reported inside {@code range} (used to avoid cascades). */
+  public boolean hasWithin(Code code, SourceRange range) {
+    return items.stream().anyMatch(d -> d.code() == code && d.range().source() == range.source()
+        && d.range().start() >= range.start() && d.range().start() <= range.end());
+  }
+
+  public boolean hasCode(Code code) {
+    return items.stream().anyMatch(d -> d.code() == code);
+  }
+
   public boolean truncated() {
     return truncated;
   }
