@@ -1,0 +1,243 @@
+package dev.skerry.compiler.report;
+
+import dev.skerry.compiler.check.Format;
+import dev.skerry.compiler.model.Bounds;
+import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Vec2;
+import dev.skerry.compiler.model.Waypoint;
+import dev.skerry.compiler.model.Zone;
+import dev.skerry.compiler.plan.Sample;
+import dev.skerry.compiler.plan.Trajectory;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * A plan view of a scenario and its plan as a standalone SVG: keep-in area, zones as written and
+ * grown by the radius, target and waypoints, clusters, the path with a marker per step, start and
+ * arrival, axes in metres, a scale bar, a legend and the safety caution.
+ */
+public final class SvgPlot {
+  /** A cluster box chosen by the MILP and the zones it holds. */
+  public record Cluster(String name, Bounds box, List<String> zones) {}
+
+  private static final int WIDTH = 900;
+  private static final int MARGIN = 60;
+  private static final int LEGEND = 190;
+  private static final String INK = "#1f2a36";
+  private static final String WATER = "#eef5f7";
+  private static final String ZONE = "#6b5b4e";
+  private static final String GROWN = "#b08968";
+  private static final String PATH = "#d1495b";
+  private static final String TARGET = "#2a9d8f";
+  private static final String CLUSTER = "#5c6bc0";
+
+  private final Scenario s;
+  private final double scale;
+  private final Bounds view;
+  private final int plotHeight;
+  private final StringBuilder out = new StringBuilder();
+
+  private SvgPlot(Scenario scenario) {
+    this.s = scenario;
+    Bounds b = scenario.area().bounds();
+    for (Zone z : scenario.zones()) {
+      b = b.union(z.shape().bounds());
+    }
+    this.view = b;
+    this.scale = (WIDTH - 2 * MARGIN - LEGEND) / Math.max(b.width(), 1e-9);
+    this.plotHeight = (int) Math.ceil(b.height() * scale);
+  }
+
+  public static String render(Scenario scenario, Trajectory path, List<Cluster> clusters, String title) {
+    return new SvgPlot(scenario).draw(path, clusters == null ? List.of() : clusters, title);
+  }
+
+  private double x(double wx) {
+    return MARGIN + (wx - view.xmin()) * scale;
+  }
+
+  private double y(double wy) {
+    return MARGIN + (view.ymax() - wy) * scale;
+  }
+
+  private static String f(double v) {
+    return String.format(Locale.ROOT, "%.2f", v);
+  }
+
+  private static String esc(String text) {
+    return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
+  }
+
+  private String draw(Trajectory path, List<Cluster> clusters, String title) {
+    int height = plotHeight + 2 * MARGIN + 40;
+    out.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+    out.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(WIDTH).append("\" height=\"").append(height)
+        .append("\" viewBox=\"0 0 ").append(WIDTH).append(' ').append(height).append("\" font-family=\"sans-serif\">\n");
+    out.append("<title>").append(esc(title)).append("</title>\n");
+    out.append("<rect width=\"100%\" height=\"100%\" fill=\"white\"/>\n");
+    out.append("<text x=\"").append(MARGIN).append("\" y=\"30\" font-size=\"16\" fill=\"").append(INK).append("\">")
+        .append(esc(title)).append("</text>\n");
+    out.append("<g id=\"area\">").append(shape(s.area().shape(), WATER, INK, "1.5", null)).append("</g>\n");
+    axes();
+    double r = s.vehicle().radius();
+    out.append("<g id=\"zones\">\n");
+    for (Zone z : s.zones()) {
+      if (r > 0) {
+        out.append(shape(z.shape().inflate(r), "none", GROWN, "1", "4 3"));
+      }
+      out.append(shape(z.shape(), ZONE, ZONE, "1", null));
+      Bounds zb = z.shape().bounds();
+      out.append("<text class=\"zone-label\" x=\"").append(f(x(zb.center().x()))).append("\" y=\"")
+          .append(f(y(zb.ymax() + r) - 3)).append("\" font-size=\"9\" fill=\"").append(ZONE)
+          .append("\" text-anchor=\"middle\">").append(esc(z.name())).append("</text>\n");
+    }
+    out.append("</g>\n");
+    if (!clusters.isEmpty()) {
+      out.append("<g id=\"clusters\">\n");
+      for (Cluster c : clusters) {
+        out.append(shape(new Shape.Box(c.box()), CLUSTER, CLUSTER, "1.5", "8 4").replace("fill=\"" + CLUSTER + "\"",
+            "fill=\"" + CLUSTER + "\" fill-opacity=\"0.12\""));
+        out.append("<text x=\"").append(f(x(c.box().xmin()) + 3)).append("\" y=\"").append(f(y(c.box().ymax()) - 4))
+            .append("\" font-size=\"10\" fill=\"").append(CLUSTER).append("\">").append(esc(c.name() + " (" + c.zones().size()
+                + " zones)")).append("</text>\n");
+      }
+      out.append("</g>\n");
+    }
+    out.append("<g id=\"target\">").append(shape(s.target().region(), TARGET, TARGET, "1.5", null)
+        .replace("fill=\"" + TARGET + "\"", "fill=\"" + TARGET + "\" fill-opacity=\"0.25\"")).append("</g>\n");
+    for (Waypoint w : s.waypoints()) {
+      out.append("<g class=\"waypoint\">").append(shape(new Shape.Box(w.region()), "none", TARGET, "1.5", "2 2"))
+          .append("</g>\n");
+    }
+    if (path != null) {
+      path(path);
+    }
+    Vec2 start = s.vehicle().start();
+    out.append("<circle id=\"start\" cx=\"").append(f(x(start.x()))).append("\" cy=\"").append(f(y(start.y())))
+        .append("\" r=\"5\" fill=\"white\" stroke=\"").append(INK).append("\" stroke-width=\"2\"/>\n");
+    scaleBar();
+    legend(path != null, !clusters.isEmpty());
+    out.append("<text x=\"").append(MARGIN).append("\" y=\"").append(height - 12).append("\" font-size=\"10\" fill=\"#555\">")
+        .append("Planning aid, not certified guidance: check local aviation or maritime rules and licensed practice; ")
+        .append("the radius margin is the user's choice.</text>\n");
+    out.append("</svg>\n");
+    return out.toString();
+  }
+
+  private String shape(Shape shape, String fill, String stroke, String width, String dash) {
+    StringBuilder b = new StringBuilder("<polygon points=\"");
+    for (Vec2 p : corners(shape)) {
+      b.append(f(x(p.x()))).append(',').append(f(y(p.y()))).append(' ');
+    }
+    b.setLength(b.length() - 1);
+    b.append("\" fill=\"").append(fill).append("\" stroke=\"").append(stroke).append("\" stroke-width=\"").append(width)
+        .append('"');
+    if (dash != null) {
+      b.append(" stroke-dasharray=\"").append(dash).append('"');
+    }
+    return b.append("/>\n").toString();
+  }
+
+  private static List<Vec2> corners(Shape shape) {
+    if (shape instanceof Shape.Polygon p) {
+      return p.vertices();
+    }
+    Bounds b = shape.bounds();
+    return List.of(new Vec2(b.xmin(), b.ymin()), new Vec2(b.xmax(), b.ymin()), new Vec2(b.xmax(), b.ymax()),
+        new Vec2(b.xmin(), b.ymax()));
+  }
+
+  private void path(Trajectory path) {
+    List<Sample> flown = path.flown();
+    out.append("<g id=\"path\">\n<polyline fill=\"none\" stroke=\"").append(PATH).append("\" stroke-width=\"2\" points=\"");
+    for (Sample p : flown) {
+      out.append(f(x(p.position().x()))).append(',').append(f(y(p.position().y()))).append(' ');
+    }
+    out.append("\"/>\n");
+    for (Sample p : flown) {
+      out.append("<circle class=\"step\" cx=\"").append(f(x(p.position().x()))).append("\" cy=\"")
+          .append(f(y(p.position().y()))).append("\" r=\"2.5\" fill=\"").append(PATH).append("\"><title>step ")
+          .append(p.step()).append(", t = ").append(Format.number(p.time())).append(" s</title></circle>\n");
+    }
+    Sample end = flown.get(flown.size() - 1);
+    out.append("<rect id=\"arrival\" x=\"").append(f(x(end.position().x()) - 5)).append("\" y=\"")
+        .append(f(y(end.position().y()) - 5)).append("\" width=\"10\" height=\"10\" fill=\"white\" stroke=\"").append(PATH)
+        .append("\" stroke-width=\"2\"/>\n</g>\n");
+  }
+
+  private void axes() {
+    double step = niceStep(view.width() / 6);
+    out.append("<g id=\"axes\" font-size=\"10\" fill=\"").append(INK).append("\">\n");
+    double bottom = MARGIN + plotHeight;
+    for (double v = Math.ceil(view.xmin() / step) * step; v <= view.xmax() + 1e-9; v += step) {
+      out.append("<line x1=\"").append(f(x(v))).append("\" y1=\"").append(f(bottom)).append("\" x2=\"").append(f(x(v)))
+          .append("\" y2=\"").append(f(bottom + 4)).append("\" stroke=\"").append(INK).append("\"/>");
+      out.append("<text x=\"").append(f(x(v))).append("\" y=\"").append(f(bottom + 16)).append("\" text-anchor=\"middle\">")
+          .append(Format.number(v)).append("</text>\n");
+    }
+    for (double v = Math.ceil(view.ymin() / step) * step; v <= view.ymax() + 1e-9; v += step) {
+      out.append("<line x1=\"").append(MARGIN - 4).append("\" y1=\"").append(f(y(v))).append("\" x2=\"").append(MARGIN)
+          .append("\" y2=\"").append(f(y(v))).append("\" stroke=\"").append(INK).append("\"/>");
+      out.append("<text x=\"").append(MARGIN - 6).append("\" y=\"").append(f(y(v) + 3)).append("\" text-anchor=\"end\">")
+          .append(Format.number(v)).append("</text>\n");
+    }
+    out.append("<text x=\"").append(f(x(view.xmax()))).append("\" y=\"").append(f(bottom + 30))
+        .append("\" text-anchor=\"end\">x (m)</text>\n");
+    out.append("<text x=\"").append(MARGIN - 6).append("\" y=\"").append(MARGIN - 8).append("\" text-anchor=\"end\">y (m)</text>\n");
+    out.append("</g>\n");
+  }
+
+  static double niceStep(double raw) {
+    double p = Math.pow(10, Math.floor(Math.log10(Math.max(raw, 1e-9))));
+    for (double m : new double[] {1, 2, 5, 10}) {
+      if (m * p >= raw) {
+        return m * p;
+      }
+    }
+    return 10 * p;
+  }
+
+  private void scaleBar() {
+    double length = niceStep(view.width() / 5);
+    double x0 = MARGIN + 160;
+    double y0 = MARGIN + plotHeight + 40;
+    out.append("<g id=\"scale-bar\"><line x1=\"").append(f(x0)).append("\" y1=\"").append(f(y0)).append("\" x2=\"")
+        .append(f(x0 + length * scale)).append("\" y2=\"").append(f(y0)).append("\" stroke=\"").append(INK)
+        .append("\" stroke-width=\"3\"/><text x=\"").append(f(x0)).append("\" y=\"").append(f(y0 - 5))
+        .append("\" font-size=\"10\" fill=\"").append(INK).append("\">").append(Format.number(length)).append(" m</text></g>\n");
+  }
+
+  private void legend(boolean hasPath, boolean hasClusters) {
+    double lx = WIDTH - LEGEND + 10;
+    double ly = MARGIN;
+    out.append("<g id=\"legend\" font-size=\"11\" fill=\"").append(INK).append("\">\n");
+    ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"" + WATER + "\" stroke=\"" + INK + "\"/>", "keep-in area");
+    ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"" + ZONE + "\"/>", "zone");
+    ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"none\" stroke=\"" + GROWN
+        + "\" stroke-dasharray=\"4 3\"/>", "zone + radius " + Format.number(s.vehicle().radius()) + " m");
+    ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"" + TARGET + "\" fill-opacity=\"0.25\" stroke=\""
+        + TARGET + "\"/>", "target");
+    if (!s.waypoints().isEmpty()) {
+      ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"none\" stroke=\"" + TARGET
+          + "\" stroke-dasharray=\"2 2\"/>", "waypoint");
+    }
+    if (hasClusters) {
+      ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"" + CLUSTER + "\" fill-opacity=\"0.12\" stroke=\""
+          + CLUSTER + "\" stroke-dasharray=\"8 4\"/>", "cluster");
+    }
+    if (hasPath) {
+      ly = legendRow(lx, ly, "<line x1=\"0\" y1=\"5\" x2=\"14\" y2=\"5\" stroke=\"" + PATH + "\" stroke-width=\"2\"/>",
+          "path, dot per step");
+      ly = legendRow(lx, ly, "<rect x=\"2\" width=\"10\" height=\"10\" fill=\"white\" stroke=\"" + PATH + "\"/>", "arrival");
+    }
+    legendRow(lx, ly, "<circle cx=\"7\" cy=\"5\" r=\"5\" fill=\"white\" stroke=\"" + INK + "\"/>", "start");
+    out.append("</g>\n");
+  }
+
+  private double legendRow(double lx, double ly, String symbol, String label) {
+    out.append("<g transform=\"translate(").append(f(lx)).append(',').append(f(ly)).append(")\">").append(symbol)
+        .append("<text x=\"20\" y=\"9\">").append(esc(label)).append("</text></g>\n");
+    return ly + 18;
+  }
+}
