@@ -1,8 +1,8 @@
 -- Headless smoke test of editors/neovim/skerry.lua on Neovim 0.7:
 --   nvim --headless -u NONE -c "luafile editors/neovim/test/smoke.lua"
 -- Checks the filetype, comment settings and syntax of a sample, the choice of launcher, and
--- that the buffer attaches to a language server (a stub, test/stub-server.mjs) and shows the
--- diagnostic it publishes. Prints "N passed, M failed" and exits non-zero on a failure.
+-- that the buffer attaches to a language server (a stub: editors/test/stub-lsp-server.mjs) and
+-- shows the diagnostic it publishes. Prints "N passed, M failed"; exits non-zero on a failure.
 
 local test_dir = vim.fn.fnamemodify(debug.getinfo(1, 'S').source:sub(2), ':p:h')
 local editors = vim.fn.fnamemodify(test_dir, ':h:h')
@@ -42,7 +42,7 @@ check('bin/skerry above the file is the launcher',
 check('the checkout is the root', skerry.root_dir(nested) == checkout, skerry.root_dir(nested))
 local elsewhere = vim.fn.tempname() .. '/b.skerry'
 check('skerry on PATH otherwise', vim.deep_equal(skerry.server_cmd(elsewhere), { 'skerry', 'lsp' }))
-vim.g.skerry_server_cmd = { 'node', test_dir .. '/stub-server.mjs' }
+vim.g.skerry_server_cmd = { 'node', editors .. '/test/stub-lsp-server.mjs' }
 check('the setting wins', skerry.server_cmd(nested)[1] == 'node')
 vim.fn.delete(checkout, 'rf')
 

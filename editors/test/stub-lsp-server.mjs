@@ -1,4 +1,4 @@
-// A stand-in for `skerry lsp` for the Neovim smoke test: speaks just enough LSP over stdio to
+// A stand-in for `skerry lsp` for the editor smoke tests (Neovim, Emacs): speaks just enough LSP over stdio to
 // be started, to receive an opened document, and to publish one diagnostic that names it.
 // It is no model of the real server's behaviour.
 
