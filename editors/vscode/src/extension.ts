@@ -26,6 +26,8 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
         void restartClient();
       }
     }),
+    // Trust may unlock the folder's own bin/skerry and its skerry.server.* settings.
+    vscode.workspace.onDidGrantWorkspaceTrust(() => restartClient()),
   );
 
   await startClient();
@@ -46,6 +48,8 @@ function currentServerCommand(): ServerCommand {
       args: config.get<string[]>('args', ['lsp']),
     },
     folders,
+    undefined,
+    vscode.workspace.isTrusted,
   );
 }
 

@@ -47,13 +47,15 @@ export function isExecutableFile(file: string): boolean {
  * - A non-blank `path` wins. `${workspaceFolder}` in it becomes the first workspace folder, and a
  *   relative path containing a separator (e.g. `bin/skerry`) is taken from that folder; a bare
  *   name (e.g. `skerry`) is left for the operating system to find on PATH.
- * - Otherwise the first workspace folder holding an executable `bin/skerry` is used.
+ * - Otherwise the first workspace folder holding an executable `bin/skerry` is used, but only
+ *   in a trusted workspace: running a program that came with the folder is what trust is for.
  * - Otherwise `skerry` on PATH.
  */
 export function resolveServerCommand(
   settings: ServerSettings,
   workspaceFolders: readonly string[],
   isExecutable: (file: string) => boolean = isExecutableFile,
+  workspaceTrusted = true,
 ): ServerCommand {
   const firstFolder = workspaceFolders.length > 0 ? workspaceFolders[0] : undefined;
   const args = [...settings.args];
@@ -71,7 +73,7 @@ export function resolveServerCommand(
     return { command, args, cwd: firstFolder, source: 'setting' };
   }
 
-  for (const folder of workspaceFolders) {
+  for (const folder of workspaceTrusted ? workspaceFolders : []) {
     const candidate = path.join(folder, WORKSPACE_LAUNCHER);
     if (isExecutable(candidate)) {
       return { command: candidate, args, cwd: folder, source: 'workspace' };

@@ -28,6 +28,15 @@ test('an empty setting prefers the first workspace folder that has an executable
   assert.equal(server.source, 'workspace');
 });
 
+test('an untrusted workspace never runs its own bin/skerry', () => {
+  const everything = () => true;
+  const trusted = resolveServerCommand({ path: '', args: DEFAULT_ARGS }, ['/w/one'], everything, true);
+  const untrusted = resolveServerCommand({ path: '', args: DEFAULT_ARGS }, ['/w/one'], everything, false);
+  assert.equal(trusted.source, 'workspace');
+  assert.equal(untrusted.command, 'skerry');
+  assert.equal(untrusted.source, 'path');
+});
+
 test('a configured path wins and is resolved against the first workspace folder', () => {
   const settings = (p) => ({ path: p, args: ['lsp', '--verbose'] });
   const folders = ['/w/one', '/w/two'];
