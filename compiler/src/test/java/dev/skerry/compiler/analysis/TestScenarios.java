@@ -56,4 +56,17 @@ public final class TestScenarios {
     return scenario(v, box(0, 0, 20, 12), zones, target(box(17.5, 5.5, 18.5, 6.5), true), List.of(),
         plan(1.0, horizon, 1, 0.1));
   }
+
+  /**
+   * A 12 m × 8 m inlet: start (1, 4) at rest, a box zone across the direct line, a polygon zone
+   * near the target box around (10.5, 4), at rest. Tiny enough for ojAlgo in a unit test.
+   */
+  public static Scenario inlet(int horizon, double fuelWeight) {
+    Vehicle v = vehicle(new Vec2(1, 4), 3, 1.5, 0.25, 8);
+    List<Zone> zones = List.of(
+        zone("hull", box(5, 2, 7, 6)),
+        zone("reef", new Shape.Polygon(List.of(new Vec2(8, 5.5), new Vec2(10, 6), new Vec2(9, 7.5)))));
+    return scenario(v, box(0, 0, 12, 8), zones, target(box(10, 3.5, 11, 4.5), true), List.of(),
+        plan(1.0, horizon, 1, fuelWeight));
+  }
 }

@@ -9,7 +9,9 @@ import org.ojalgo.optimisation.Optimisation;
 
 /**
  * Test-scope bridge from our {@link Milp} to ojAlgo's ExpressionsBasedModel, so lowering tests can
- * solve tiny instances without waiting for the solver backends.
+ * solve tiny instances without waiting for the solver backends. ojAlgo's presolvers are cleared
+ * for the solve (a registry-wide setting, restored afterwards): on this formulation that is several
+ * times faster.
  */
 final class OjAlgoSolve {
   private OjAlgoSolve() {}
@@ -54,7 +56,13 @@ final class OjAlgoSolve {
         e.upper(r.upper());
       }
     }
-    Optimisation.Result res = model.minimise();
+    Optimisation.Result res;
+    ExpressionsBasedModel.clearPresolvers();
+    try {
+      res = model.minimise();
+    } finally {
+      ExpressionsBasedModel.resetPresolvers();
+    }
     double[] x = new double[cols.length];
     for (int i = 0; i < x.length; i++) {
       x[i] = res.doubleValue(i);
