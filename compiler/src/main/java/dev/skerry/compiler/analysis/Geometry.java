@@ -63,10 +63,6 @@ public final class Geometry {
     return maxOver(b, n) < c - TOLERANCE * Math.max(1, Math.abs(c));
   }
 
-  /** The smallest box holding both. */
-  public static Bounds hull(Bounds a, Bounds b) {
-    return a.union(b);
-  }
 
   /** The 1 or 2 non-zero coefficients a normal puts into a row. */
   public static int termCount(Vec2 n) {

@@ -40,8 +40,10 @@ public record Reachability(Bounds keepIn, List<Bounds> positions, List<Bounds> v
     LimitPolygon accel = LimitPolygon.inscribed(v.maxAccel(), v.sides());
     Bounds keepIn = deflatedArea(scenario).bounds();
     List<Fact> facts = new ArrayList<>();
-    double[][] x = axis(v.start().x(), v.startVelocity().x(), speed.xmin(), speed.xmax(), accel.xmin(), accel.xmax(), dt, n);
-    double[][] y = axis(v.start().y(), v.startVelocity().y(), speed.ymin(), speed.ymax(), accel.ymin(), accel.ymax(), dt, n);
+    double[][] x = axis(v.start().x(), v.startVelocity().x(), speed.xmin(), speed.xmax(), accel.xmin(),
+        accel.xmax(), dt, n);
+    double[][] y = axis(v.start().y(), v.startVelocity().y(), speed.ymin(), speed.ymax(), accel.ymin(),
+        accel.ymax(), dt, n);
     List<Bounds> positions = new ArrayList<>(n + 1);
     List<Bounds> velocities = new ArrayList<>(n + 1);
     boolean reported = false;

@@ -46,10 +46,12 @@ final class ClusterLowering {
       double[] m = as.bigM();
       Variable[] cb = c.clusterBounds[l];
       Origin origin = Origin.of(zone, "contain");
-      c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[0], LinearExpr.of(cb[0]).add(a[o][l], m[0]), z.xmin() + m[0], origin);
-      c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[1], LinearExpr.of(cb[1], -1).add(a[o][l], m[1]), -z.xmax() + m[1], origin);
-      c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[2], LinearExpr.of(cb[2]).add(a[o][l], m[2]), z.ymin() + m[2], origin);
-      c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[3], LinearExpr.of(cb[3], -1).add(a[o][l], m[3]), -z.ymax() + m[3], origin);
+      double[] edge = {z.xmin(), z.xmax(), z.ymin(), z.ymax()};
+      for (int side = 0; side < 4; side++) {
+        double sign = side % 2 == 0 ? 1 : -1;
+        LinearExpr e = LinearExpr.of(cb[side], sign).add(a[o][l], m[side]);
+        c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[side], e, sign * edge[side] + m[side], origin);
+      }
     }
     for (int o = 0; o < cl.zoneCount(); o++) {
       c.builder.addEquality("asg_" + cl.zoneTags().get(o), once[o] == null ? new LinearExpr() : once[o], 1,

@@ -58,8 +58,10 @@ class ReachabilityProperties {
         if (!reach.keepIn().contains(p)) {
           break;
         }
-        assertTrue(grow(reach.position(k)).contains(p), "seed " + seed + ": p_" + k + " = " + p + " outside " + reach.position(k));
-        assertTrue(grow(reach.velocity(k)).contains(v), "seed " + seed + ": v_" + k + " = " + v + " outside " + reach.velocity(k));
+        assertTrue(grow(reach.position(k)).contains(p),
+            "seed " + seed + ": p_" + k + " = " + p + " outside " + reach.position(k));
+        assertTrue(grow(reach.velocity(k)).contains(v),
+            "seed " + seed + ": v_" + k + " = " + v + " outside " + reach.velocity(k));
       }
     }
   }

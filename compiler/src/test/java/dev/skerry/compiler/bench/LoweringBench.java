@@ -26,8 +26,9 @@ import java.util.Random;
 /**
  * Lowering benchmark (a main class, not a test): generated scenarios with 10 to 2,000 box zones
  * and 10 to 50 steps, pruned and plain. Prints per case the analysis time, the lowering wall time
- * (layout + MILP, best of at least {@value #REPEATS} runs, more for fast cases, after a warm-up), peak heap during one lowering, non-zeros per second,
- * and at the end the log-log slope of lowering time against NS·NO.
+ * (layout + MILP, best of at least {@value #REPEATS} runs, more for fast cases, after a warm-up),
+ * peak heap during one lowering, non-zeros per second, and at the end the log-log slope of
+ * lowering time against NS·NO.
  *
  * <p>Run: {@code mvn -q -B install -DskipTests -pl grammar,compiler -am && mvn -q -B test-compile
  * -pl compiler && java -Xmx4g -cp compiler/target/classes:compiler/target/test-classes:$(cat

@@ -22,7 +22,6 @@ class PruningPreservesOptimumTest {
   @CsvSource({
       "8, 0.1, true, 0",
       "8, 0.0, false, 0",
-      "9, 0.0, true, 0",
       "8, 0.0, false, 2"})
   void sameOptimumFewerBinaries(int n, double fuel, boolean guard, int clusters) {
     Scenario base = TestScenarios.inlet(n, fuel);

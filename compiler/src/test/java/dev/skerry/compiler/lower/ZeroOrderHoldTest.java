@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import dev.skerry.compiler.analysis.TestScenarios;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.Row;
+import dev.skerry.compiler.model.PlanOptions;
+import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -42,8 +44,8 @@ class ZeroOrderHoldTest {
   @ValueSource(doubles = {0.5, 1, 2})
   void loweredRowsUseTheDiscreteMatrices(double t) {
     var s = TestScenarios.inlet(3, 0.1);
-    s = s.withPlan(new dev.skerry.compiler.model.PlanOptions(t, 3, 1, 0.1, 0,
-        dev.skerry.compiler.model.PlanOptions.SymmetryRule.NONE, 0, "default", null, 0, 0, true, true, null));
+    s = s.withPlan(
+        new PlanOptions(t, 3, 1, 0.1, 0, SymmetryRule.NONE, 0, "default", null, 0, 0, true, true, null));
     Milp m = Lowering.lower(s);
     Row px = row(m, "dynpx_skiff_1");
     assertEquals(1, coef(m, px, "px_skiff_2"));
