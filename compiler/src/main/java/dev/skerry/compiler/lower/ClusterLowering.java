@@ -1,0 +1,89 @@
+package dev.skerry.compiler.lower;
+
+import dev.skerry.compiler.analysis.ClusterLayout;
+import dev.skerry.compiler.milp.LinearExpr;
+import dev.skerry.compiler.milp.Origin;
+import dev.skerry.compiler.milp.Variable;
+import dev.skerry.compiler.model.Bounds;
+import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
+
+/**
+ * In-MILP clustering as laid out by {@link ClusterLayout}: cluster bound columns, assignment
+ * binaries a_{o,l} with Σ_l a_{o,l} = 1, containment rows (a_{o,l} = 1 ⇒ box l ⊇ zone o's inflated
+ * bounding box) and the symmetry rows of the plan's rule. Avoidance of the boxes is lowered by
+ * {@link ZoneAvoidanceLowering}. Run before it: the avoidance rows use the bound columns.
+ */
+final class ClusterLowering {
+  private static final String[] SIDES = {"xmin", "xmax", "ymin", "ymax"};
+
+  private ClusterLowering() {}
+
+  static void lower(LoweringContext c) {
+    ClusterLayout cl = c.layout.clusters();
+    if (cl == null) {
+      return;
+    }
+    Bounds w = cl.world();
+    c.clusterBounds = new Variable[cl.count()][4];
+    for (int l = 0; l < cl.count(); l++) {
+      String e = "c" + l;
+      c.clusterBounds[l][0] = c.builder.newContinuous("cxmin_" + e, w.xmin(), w.xmax(), Origin.of(e, "cluster-bound"));
+      c.clusterBounds[l][1] = c.builder.newContinuous("cxmax_" + e, w.xmin(), w.xmax(), Origin.of(e, "cluster-bound"));
+      c.clusterBounds[l][2] = c.builder.newContinuous("cymin_" + e, w.ymin(), w.ymax(), Origin.of(e, "cluster-bound"));
+      c.clusterBounds[l][3] = c.builder.newContinuous("cymax_" + e, w.ymin(), w.ymax(), Origin.of(e, "cluster-bound"));
+    }
+    Variable[][] a = new Variable[cl.zoneCount()][cl.count()];
+    LinearExpr[] once = new LinearExpr[cl.zoneCount()];
+    for (ClusterLayout.Assignment as : cl.assignments()) {
+      int o = as.zone();
+      int l = as.cluster();
+      String zone = cl.zoneNames().get(o);
+      String tag = cl.zoneTags().get(o) + "_c" + l;
+      a[o][l] = c.builder.newBinary("a_" + tag, Origin.of(zone, "assign"));
+      once[o] = once[o] == null ? new LinearExpr() : once[o];
+      once[o].add(a[o][l]);
+      Bounds z = as.zoneBox();
+      double[] m = as.bigM();
+      Variable[] cb = c.clusterBounds[l];
+      Origin origin = Origin.of(zone, "contain");
+      double[] edge = {z.xmin(), z.xmax(), z.ymin(), z.ymax()};
+      for (int side = 0; side < 4; side++) {
+        double sign = side % 2 == 0 ? 1 : -1;
+        LinearExpr e = LinearExpr.of(cb[side], sign).add(a[o][l], m[side]);
+        c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[side], e, sign * edge[side] + m[side], origin);
+      }
+    }
+    for (int o = 0; o < cl.zoneCount(); o++) {
+      c.builder.addEquality("asg_" + cl.zoneTags().get(o), once[o] == null ? new LinearExpr() : once[o], 1,
+          Origin.of(cl.zoneNames().get(o), "assign-once"));
+    }
+    symmetry(c, cl, a);
+  }
+
+  private static void symmetry(LoweringContext c, ClusterLayout cl, Variable[][] a) {
+    if (cl.rule() == SymmetryRule.ORDERED) {
+      for (int l = 1; l < cl.count(); l++) {
+        int m = cl.eligible(l);
+        if (m == 0) {
+          continue;
+        }
+        LinearExpr e = new LinearExpr();
+        for (int o = 0; o < cl.zoneCount(); o++) {
+          if (a[o][l] != null) {
+            e.add(a[o][l]);
+          }
+          if (a[o][l - 1] != null) {
+            e.add(a[o][l - 1], -m);
+          }
+        }
+        c.builder.addLessOrEqual("symuse_c" + l, e, 0, Origin.of("c" + l, "symmetry"));
+      }
+    } else if (cl.rule() == SymmetryRule.SORTED) {
+      for (int l = 0; l + 1 < cl.count(); l++) {
+        c.builder.addLessOrEqual("symsort_c" + l,
+            LinearExpr.of(c.clusterBounds[l][0]).add(c.clusterBounds[l + 1][0], -1), 0,
+            Origin.of("c" + l, "symmetry"));
+      }
+    }
+  }
+}
