@@ -62,7 +62,7 @@ public record FormulationLayout(
     Domains d = new Domains(reach, pruning, guard, s.plan().horizon());
     MotionLayout motion = MotionLayout.of(s, names, reach, pruning);
     ArrivalLayout arrival = ArrivalLayout.of(s.target(), names.tag("target", s.target().name()), d, facts);
-    double radius = s.vehicle().radius();
+    double radius = margin(s);
     List<AvoidanceLayout.Obstacle> obstacles = new ArrayList<>();
     long[] tally = new long[3];
     ClusterLayout clusters = null;
@@ -93,6 +93,17 @@ public record FormulationLayout(
     }
     AvoidanceLayout avoidance = new AvoidanceLayout(obstacles, tally[0], tally[1], tally[2]);
     return new FormulationLayout(s, pruning, guard, reach, motion, arrival, avoidance, clusters, waypoints, facts);
+  }
+
+  /**
+   * How far zones are grown for avoidance: the vehicle's radius, plus, with the guard on, the
+   * largest bulge of the true zero-order-hold arc from its chord, |u|·Δt²/8 ≤ a_max·Δt²/8 (the arc
+   * p_k + v_k·τ + ½·u_k·τ² departs from the straight segment by ½·|u|·τ·(Δt − τ), largest at
+   * τ = Δt/2). The guard keeps each chord out of the grown zone, so the flown arc keeps the radius.
+   */
+  public static double margin(Scenario s) {
+    double sag = s.plan().guard() ? s.vehicle().maxAccel() * s.plan().step() * s.plan().step() / 8 : 0;
+    return s.vehicle().radius() + sag;
   }
 
   /**
