@@ -1,0 +1,15 @@
+package dev.skerry.compiler.semdiff;
+
+import dev.skerry.compiler.model.Scenario;
+
+/**
+ * Where the diff gets predicted MILP sizes from. The analysis stage provides them; until it is part
+ * of the build, {@link #NONE} answers null and the diff leaves sizes out.
+ */
+@FunctionalInterface
+public interface SizeSource {
+  SizeSource NONE = scenario -> null;
+
+  /** The predicted sizes of {@code scenario}, or null when they cannot be predicted. */
+  SizeFigures sizes(Scenario scenario);
+}
