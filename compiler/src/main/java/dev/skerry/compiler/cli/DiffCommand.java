@@ -100,7 +100,7 @@ final class DiffCommand implements Callable<Integer> {
     try {
       Scenario before = load(oldName, oldLabel, newName, gitPath);
       Scenario after = load(newName, newLabel, oldName, gitPath);
-      report = ScenarioDiff.compare(oldLabel, before, newLabel, after, SizeSource.NONE);
+      report = ScenarioDiff.compare(oldLabel, before, newLabel, after, SizeTable::figures);
     } catch (Trouble e) {
       PrintWriter to = forGit ? out : err;
       to.println((forGit ? oldLabel + ": " : "skerry diff: ") + e.getMessage());

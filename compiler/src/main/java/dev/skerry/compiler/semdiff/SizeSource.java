@@ -3,8 +3,8 @@ package dev.skerry.compiler.semdiff;
 import dev.skerry.compiler.model.Scenario;
 
 /**
- * Where the diff gets predicted MILP sizes from. The analysis stage provides them; until it is part
- * of the build, {@link #NONE} answers null and the diff leaves sizes out.
+ * Where the diff gets predicted MILP sizes from: the command line passes the analysis stage;
+ * {@link #NONE} answers null and the diff leaves sizes out (used by tests of the wording).
  */
 @FunctionalInterface
 public interface SizeSource {
