@@ -15,7 +15,7 @@ public final class DiffText {
     if (report.identical()) {
       out.add("no differences in meaning");
     }
-    if (report.hasSizes()) {
+    if (report.hasSizes() && !report.identical()) {
       SizeFigures a = report.sizesBefore();
       SizeFigures b = report.sizesAfter();
       out.add("sizes: " + String.join("; ", figure("binaries", a.binaries(), b.binaries()),
