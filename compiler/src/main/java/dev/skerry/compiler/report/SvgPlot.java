@@ -7,6 +7,7 @@ import dev.skerry.compiler.model.Shape;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Waypoint;
 import dev.skerry.compiler.model.Zone;
+import dev.skerry.compiler.plan.ClusterBox;
 import dev.skerry.compiler.plan.Sample;
 import dev.skerry.compiler.plan.Trajectory;
 import java.util.List;
@@ -18,9 +19,6 @@ import java.util.Locale;
  * arrival, axes in metres, a scale bar, a legend and the safety caution.
  */
 public final class SvgPlot {
-  /** A cluster box chosen by the MILP and the zones it holds. */
-  public record Cluster(String name, Bounds box, List<String> zones) {}
-
   private static final int WIDTH = 900;
   private static final int MARGIN = 60;
   private static final int LEGEND = 190;
@@ -49,7 +47,7 @@ public final class SvgPlot {
     this.plotHeight = (int) Math.ceil(b.height() * scale);
   }
 
-  public static String render(Scenario scenario, Trajectory path, List<Cluster> clusters, String title) {
+  public static String render(Scenario scenario, Trajectory path, List<ClusterBox> clusters, String title) {
     return new SvgPlot(scenario).draw(path, clusters == null ? List.of() : clusters, title);
   }
 
@@ -69,7 +67,7 @@ public final class SvgPlot {
     return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
   }
 
-  private String draw(Trajectory path, List<Cluster> clusters, String title) {
+  private String draw(Trajectory path, List<ClusterBox> clusters, String title) {
     int height = plotHeight + 2 * MARGIN + 40;
     out.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
     out.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(WIDTH).append("\" height=\"").append(height)
@@ -95,7 +93,7 @@ public final class SvgPlot {
     out.append("</g>\n");
     if (!clusters.isEmpty()) {
       out.append("<g id=\"clusters\">\n");
-      for (Cluster c : clusters) {
+      for (ClusterBox c : clusters) {
         out.append(shape(new Shape.Box(c.box()), CLUSTER, CLUSTER, "1.5", "8 4").replace("fill=\"" + CLUSTER + "\"",
             "fill=\"" + CLUSTER + "\" fill-opacity=\"0.12\""));
         out.append("<text x=\"").append(f(x(c.box().xmin()) + 3)).append("\" y=\"").append(f(y(c.box().ymax()) - 4))

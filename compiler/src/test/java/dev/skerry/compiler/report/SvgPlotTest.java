@@ -8,6 +8,7 @@ import dev.skerry.compiler.check.ScenarioChecker;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.model.Vec2;
+import dev.skerry.compiler.plan.ClusterBox;
 import dev.skerry.compiler.plan.Sample;
 import dev.skerry.compiler.plan.Trajectory;
 import dev.skerry.compiler.source.SourceFile;
@@ -44,7 +45,7 @@ class SvgPlotTest {
   void theSvgIsWellFormedWithItsPartsAndRendersWithARealRenderer() throws Exception {
     Scenario s = harbour();
     Trajectory path = line(s.vehicle().start(), new Vec2(110, 58), 20);
-    List<SvgPlot.Cluster> clusters = List.of(new SvgPlot.Cluster("c1", new Bounds(10, 30, 30, 55), List.of("hull_a", "hull_b")));
+    List<ClusterBox> clusters = List.of(new ClusterBox("c1", new Bounds(10, 30, 30, 55), List.of("hull_a", "hull_b")));
     String svg = SvgPlot.render(s, path, clusters, "tern_cove_survey — test path");
     Document doc = DocumentBuilderFactory.newInstance().newDocumentBuilder()
         .parse(new ByteArrayInputStream(svg.getBytes(StandardCharsets.UTF_8)));
