@@ -381,7 +381,14 @@ public final class MpsReader {
     model.setBound(type, column, v, lineNo);
   }
 
+  /**
+   * Only one RHS, RANGES and BOUNDS set is read. A blank set name (fixed MPS) or a left-out one
+   * (free MPS) belongs to the set in use, as in GLPK's own examples.
+   */
   private void oneSet(Section which, String set) throws ModelFormatException {
+    if (set.isEmpty()) {
+      return;
+    }
     String first = sets[which.ordinal()];
     if (first == null) {
       sets[which.ordinal()] = set;

@@ -81,8 +81,17 @@ public final class OutsideSolvers {
     }
   }
 
-  /** Solves with {@code glpsol --freemps|--mps|--lp F -w SOL}. */
+  /** Solves with {@code glpsol --freemps|--mps|--lp F -w SOL} (minimising). */
   public static Result glpsolObjective(Path model, ModelFormat format)
+      throws IOException, InterruptedException {
+    return glpsolObjective(model, format, false);
+  }
+
+  /**
+   * Solves with glpsol; {@code maximize} adds {@code --max}, for outside files that are meant to
+   * be maximised but carry no sense (our own files are always minimisations).
+   */
+  public static Result glpsolObjective(Path model, ModelFormat format, boolean maximize)
       throws IOException, InterruptedException {
     Path glpsol = require("glpsol", "glpk-utils");
     Path work = Files.createTempDirectory("skerry-glpsol");
@@ -94,15 +103,13 @@ public final class OutsideSolvers {
             case FIXED_MPS -> "--mps";
             case LP -> "--lp";
           };
-      String log =
-          run(
-              work,
-              List.of(
-                  glpsol.toString(),
-                  option,
-                  model.toAbsolutePath().toString(),
-                  "-w",
-                  solution.toString()));
+      List<String> command =
+          new ArrayList<>(
+              List.of(glpsol.toString(), option, model.toAbsolutePath().toString(), "-w", solution.toString()));
+      if (maximize) {
+        command.add("--max");
+      }
+      String log = run(work, command);
       if (!Files.exists(solution)) {
         return new Result("glpsol", Status.FAILED, Double.NaN, tail(log));
       }
