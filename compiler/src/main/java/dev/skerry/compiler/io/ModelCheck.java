@@ -34,7 +34,9 @@ final class ModelCheck {
       }
       bound(v.lower(), "lower bound of column " + v.name());
       bound(v.upper(), "upper bound of column " + v.name());
-      if (v.lower() == Double.POSITIVE_INFINITY || v.upper() == Double.NEGATIVE_INFINITY) {
+      if (v.lower() == Double.POSITIVE_INFINITY
+          || v.upper() == Double.NEGATIVE_INFINITY
+          || v.lower() > v.upper()) {
         throw new IllegalArgumentException(
             "column " + v.name() + " has bounds [" + v.lower() + ", " + v.upper() + "]");
       }
@@ -57,7 +59,9 @@ final class ModelCheck {
       }
       bound(r.lower(), "lower bound of " + where);
       bound(r.upper(), "upper bound of " + where);
-      if (r.lower() == Double.POSITIVE_INFINITY || r.upper() == Double.NEGATIVE_INFINITY) {
+      if (r.lower() == Double.POSITIVE_INFINITY
+          || r.upper() == Double.NEGATIVE_INFINITY
+          || r.lower() > r.upper()) {
         throw new IllegalArgumentException(
             where + " has bounds [" + r.lower() + ", " + r.upper() + "]");
       }

@@ -165,8 +165,8 @@ public final class MpsWriter {
             .append(count == 1 ? " name" : " names")
             .append(fixed ? " that fixed MPS cannot hold (over 8 characters," : " that free MPS cannot hold (over 64 characters,")
             .append(" blanks or unusual characters) ")
-            .append(count == 1 ? "was" : "were")
-            .append(" replaced by aliases; the name map lists them.")
+            .append(count == 1 ? "was replaced by an alias" : "were replaced by aliases")
+            .append("; the name map lists them.")
             .endLine();
       }
       // Both readers take a long name here too (glpsol shows its first 8 characters only).
@@ -396,7 +396,8 @@ public final class MpsWriter {
         case FREE -> FREE;
         case LE -> LESS;
         case GE -> GREATER;
-        case EQ -> EQUAL;
+        // -0.0 and 0.0 compare equal but are kept apart: write such a row as a range of width 0.
+        case EQ -> Double.compare(r.lower(), r.upper()) == 0 ? EQUAL : RANGE_FROM_LOWER;
         case RANGE -> Math.abs(r.lower()) <= Math.abs(r.upper()) ? RANGE_FROM_LOWER : RANGE_FROM_UPPER;
       };
     }

@@ -58,14 +58,15 @@ final class NumberText {
     if (v == Math.rint(v) && Math.abs(v) < 1e11) {
       return Long.toString((long) v);
     }
-    BigDecimal exact = new BigDecimal(v);
-    for (int digits = 1; digits <= 17; digits++) {
-      BigDecimal rounded = exact.round(new MathContext(digits, RoundingMode.HALF_EVEN));
+    // Java's own text reads back exactly; try fewer of its digits first.
+    BigDecimal text = new BigDecimal(Double.toString(v)).stripTrailingZeros();
+    for (int digits = 1; digits < text.precision(); digits++) {
+      BigDecimal rounded = text.round(new MathContext(digits, RoundingMode.HALF_EVEN));
       if (rounded.doubleValue() == v) {
         return spell(rounded, FIXED_WIDTH);
       }
     }
-    return null;
+    return spell(text, FIXED_WIDTH);
   }
 
   /**
@@ -106,26 +107,35 @@ final class NumberText {
   }
 
   /**
-   * The RANGES entry for a row {@code lo ≤ a·x ≤ up} written with its right-hand side at the end
-   * of smaller magnitude ({@code near}): the fewest significant digits {@code R} such that the
-   * far end, computed as the exact decimal sum {@code near ± R} rounded once to a double (what
-   * {@link MpsReader} does), is exactly {@code far}. Returns null when no such text fits in {@code
+   * The RANGES entry for a row {@code lo ≤ a·x ≤ up} written with its right-hand side at one end
+   * ({@code near}): the width {@code R} with the fewest significant digits such that the other
+   * end, computed as the exact decimal sum {@code near ± R} rounded once to a double (what {@link
+   * MpsReader} does), is exactly {@code far}. Returns null when that text does not fit in {@code
    * maxLength} characters.
    */
   static String rangeWidth(double near, double far, int maxLength) {
     BigDecimal nearExact = new BigDecimal(near);
-    BigDecimal width = new BigDecimal(far).subtract(nearExact).abs();
+    BigDecimal farExact = new BigDecimal(far);
+    BigDecimal width = farExact.subtract(nearExact).abs();
     if (width.signum() == 0) {
       return "0";
     }
+    // Every decimal strictly between the midpoints to far's neighbours rounds to far.
+    BigDecimal below = midpoint(farExact, Math.nextDown(far));
+    BigDecimal above = midpoint(farExact, Math.nextUp(far));
     boolean up = far > near;
-    for (int digits = 1; digits <= 25; digits++) {
+    BigDecimal least = up ? below.subtract(nearExact) : nearExact.subtract(above);
+    BigDecimal most = up ? above.subtract(nearExact) : nearExact.subtract(below);
+    for (int digits = 1; digits <= width.precision(); digits++) {
       BigDecimal r = width.round(new MathContext(digits, RoundingMode.HALF_EVEN));
-      BigDecimal end = up ? nearExact.add(r) : nearExact.subtract(r);
-      if (end.doubleValue() == far) {
+      if (r.compareTo(least) > 0 && r.compareTo(most) < 0) {
         return spell(r, maxLength);
       }
     }
-    return null;
+    return spell(width, maxLength);
+  }
+
+  private static BigDecimal midpoint(BigDecimal exact, double neighbour) {
+    return exact.add(new BigDecimal(neighbour)).divide(BigDecimal.valueOf(2));
   }
 }

@@ -11,7 +11,7 @@ final class TextSink {
   private static final int CHUNK = 1 << 16;
 
   private final Appendable out;
-  private final StringBuilder buffer = new StringBuilder(CHUNK + 512);
+  private final StringBuilder buffer = new StringBuilder(256);
   private int lineStart;
 
   private TextSink(Appendable out) {
@@ -62,7 +62,7 @@ final class TextSink {
   void endLine() throws IOException {
     buffer.append('\n');
     lineStart = buffer.length();
-    if (buffer.length() >= CHUNK) {
+    if (buffer.length() >= CHUNK || out == null) {
       flush();
     }
   }
