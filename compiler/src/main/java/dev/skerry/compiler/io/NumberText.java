@@ -58,6 +58,21 @@ final class NumberText {
     if (v == Math.rint(v) && Math.abs(v) < 1e11) {
       return Long.toString((long) v);
     }
+    // Fast path for short decimals (most coefficients): v·10^k whole for a small k gives the
+    // decimal with the fewest digits, because two decimals of at most 15 significant digits
+    // never read as the same double.
+    double scale = 1;
+    for (int k = 1; k <= 6; k++) {
+      scale *= 10;
+      double scaled = v * scale;
+      if (scaled == Math.rint(scaled) && Math.abs(scaled) < 1e15) {
+        BigDecimal decimal = BigDecimal.valueOf((long) scaled, k);
+        if (decimal.doubleValue() == v) {
+          return spell(decimal, FIXED_WIDTH);
+        }
+        break;
+      }
+    }
     // Java's own text reads back exactly; try fewer of its digits first.
     BigDecimal text = new BigDecimal(Double.toString(v)).stripTrailingZeros();
     for (int digits = 1; digits < text.precision(); digits++) {

@@ -40,7 +40,7 @@ class NumberTextTest {
   @Test
   void fixedTextAlwaysReadsBackOrIsRefused() {
     Random rnd = new Random(7);
-    for (int i = 0; i < 5_000; i++) {
+    for (int i = 0; i < 2_000; i++) {
       double v =
           switch (i % 3) {
             case 0 -> BigDecimal.valueOf(rnd.nextInt(2_000_000) - 1_000_000, rnd.nextInt(30) - 12).doubleValue();
@@ -68,7 +68,7 @@ class NumberTextTest {
     assertEquals("7.75", NumberText.rangeWidth(0.25, -7.5, 12));
     assertEquals("0", NumberText.rangeWidth(2, 2, 12));
     Random rnd = new Random(11);
-    for (int i = 0; i < 5_000; i++) {
+    for (int i = 0; i < 2_000; i++) {
       double a = rnd.nextGaussian() * Math.pow(10, rnd.nextInt(30) - 15);
       double b = rnd.nextGaussian() * Math.pow(10, rnd.nextInt(30) - 15);
       double near = Math.abs(a) <= Math.abs(b) ? a : b;
