@@ -7,6 +7,11 @@ import dev.skerry.compiler.milp.Milp;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.stream.LongStream;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.io.TempDir;
@@ -69,24 +74,47 @@ class OutsideJudgeTest {
     }
   }
 
-  /** The model's optimum as cbc and glpsol find it in each of the three files. */
+  /**
+   * The model's optimum as cbc and glpsol find it in each of the three files; the six solves run
+   * two at a time.
+   */
   private List<Double> outsideOptima(Milp milp) throws Exception {
-    List<Double> optima = new ArrayList<>();
+    List<Callable<Double>> solves = new ArrayList<>();
     for (ModelFormat format : ModelFormat.values()) {
       Path file = folder.resolve(milp.name() + format.extension());
-      ModelFiles.Written written = ModelFiles.write(milp, file, format);
-      WriteSummary summary = written.summary();
+      WriteSummary summary = ModelFiles.write(milp, file, format).summary();
       assertEquals(!milp.objective().minimize(), summary.objectiveNegated());
-      for (OutsideSolvers.Result result :
-          List.of(
-              OutsideSolvers.cbcObjective(file), OutsideSolvers.glpsolObjective(file, format))) {
-        assertEquals(
-            OutsideSolvers.Status.OPTIMAL,
-            result.status(),
-            result.solver() + " on " + file.getFileName() + ": " + result.detail());
-        optima.add(summary.modelObjective(result.objective()));
+      solves.add(() -> optimum(summary, OutsideSolvers.cbcObjective(file), file));
+      solves.add(() -> optimum(summary, OutsideSolvers.glpsolObjective(file, format), file));
+    }
+    List<Double> optima = new ArrayList<>();
+    for (Future<Double> result : SOLVERS.invokeAll(solves)) {
+      try {
+        optima.add(result.get());
+      } catch (ExecutionException e) {
+        if (e.getCause() instanceof AssertionError failure) {
+          throw failure;
+        }
+        throw e;
       }
     }
     return optima;
   }
+
+  private static double optimum(WriteSummary summary, OutsideSolvers.Result result, Path file) {
+    assertEquals(
+        OutsideSolvers.Status.OPTIMAL,
+        result.status(),
+        result.solver() + " on " + file.getFileName() + ": " + result.detail());
+    return summary.modelObjective(result.objective());
+  }
+
+  private static final ExecutorService SOLVERS =
+      Executors.newFixedThreadPool(
+          2,
+          task -> {
+            Thread t = new Thread(task, "outside-solver");
+            t.setDaemon(true);
+            return t;
+          });
 }
