@@ -6,8 +6,8 @@ import java.util.List;
 
 /**
  * The constraint matrix stored by column (MPS lists coefficients column after column), with zero
- * coefficients left out. Three flat arrays, so a million rows cost tens of megabytes, not
- * millions of objects.
+ * coefficients left out. Three flat arrays, so a million rows cost tens of megabytes, not millions
+ * of objects.
  */
 final class ColumnMajor {
   /** Entries of column j sit at positions {@code start[j] .. start[j+1]-1}. */

@@ -10,19 +10,19 @@ import java.util.Locale;
 import java.util.Set;
 
 /**
- * The name each row and column gets in a file. A model name the format can hold is kept as it
- * is; any other is replaced, deterministically (the same model always gets the same names), by
- * a name no kept name uses, and the pair goes into the {@link NameMap}. Replacement names are
- * unique across rows and columns, so the map needs no kind column.
+ * The name each row and column gets in a file. A model name the format can hold is kept as it is;
+ * any other is replaced, deterministically (the same model always gets the same names), by a name
+ * no kept name uses, and the pair goes into the {@link NameMap}. Replacement names are unique
+ * across rows and columns, so the map needs no kind column.
  *
  * <ul>
- *   <li>MPS: printable ASCII without quotes, not starting with {@code $} or {@code *}, at most
- *       64 characters (free) or 8 (fixed). Others become {@code C0000001}, {@code R0000001}, …
+ *   <li>MPS: printable ASCII without quotes, not starting with {@code $} or {@code *}, at most 64
+ *       characters (free) or 8 (fixed). Others become {@code C0000001}, {@code R0000001}, …
  *   <li>LP: {@code [A-Za-z_][A-Za-z0-9_]*}, at most 64 characters, no keyword of the format and
- *       nothing a reader could take for a number's exponent ({@code e9}). Others are sanitized:
- *       bad characters become {@code _}, a {@code _} goes in front when needed, and {@code _2},
- *       {@code _3}, … make them unique. A range becomes two rows, {@code NAME_lo} and {@code
- *       NAME_hi}, both listed in the map.
+ *       nothing a reader could take for a number's exponent ({@code e9}). Others are sanitized: bad
+ *       characters become {@code _}, a {@code _} goes in front when needed, and {@code _2}, {@code
+ *       _3}, … make them unique. A range becomes two rows, {@code NAME_lo} and {@code NAME_hi},
+ *       both listed in the map.
  * </ul>
  */
 final class FileNames {
@@ -32,10 +32,38 @@ final class FileNames {
 
   private static final Set<String> LP_KEYWORDS =
       Set.of(
-          "min", "minimize", "minimise", "minimum", "max", "maximize", "maximise", "maximum",
-          "subject", "to", "such", "that", "st", "bound", "bounds", "gen", "general", "generals",
-          "int", "integer", "integers", "bin", "binary", "binaries", "semi", "semis",
-          "semicontinuous", "sos", "end", "free", "inf", "infinity");
+          "min",
+          "minimize",
+          "minimise",
+          "minimum",
+          "max",
+          "maximize",
+          "maximise",
+          "maximum",
+          "subject",
+          "to",
+          "such",
+          "that",
+          "st",
+          "bound",
+          "bounds",
+          "gen",
+          "general",
+          "generals",
+          "int",
+          "integer",
+          "integers",
+          "bin",
+          "binary",
+          "binaries",
+          "semi",
+          "semis",
+          "semicontinuous",
+          "sos",
+          "end",
+          "free",
+          "inf",
+          "infinity");
 
   /** Name of column j in the file. */
   final String[] columns;
@@ -74,8 +102,8 @@ final class FileNames {
   }
 
   /**
-   * The model name for a NAME line: printable ASCII without spaces (others become {@code _}),
-   * at most {@code maxLength} characters, {@code unnamed} when empty.
+   * The model name for a NAME line: printable ASCII without spaces (others become {@code _}), at
+   * most {@code maxLength} characters, {@code unnamed} when empty.
    */
   static String modelName(String name, int maxLength) {
     if (name == null || name.isEmpty()) {
@@ -183,7 +211,10 @@ final class FileNames {
     }
     if (alias(prefix, k).length() > maxLength) {
       throw new IllegalArgumentException(
-          "too many names to replace: alias " + alias(prefix, k) + " is longer than " + maxLength
+          "too many names to replace: alias "
+              + alias(prefix, k)
+              + " is longer than "
+              + maxLength
               + " characters; write free MPS instead");
     }
     return k;

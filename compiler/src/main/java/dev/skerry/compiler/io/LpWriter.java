@@ -19,9 +19,9 @@ import java.util.Optional;
  *       WriteSummary#objectiveNegated()}.
  *   <li>The objective constant is the cost of a column fixed at 1 (cbc drops a constant in the
  *       objective, glpsol refuses it).
- *   <li>A range {@code lo ≤ a·x ≤ up} becomes two rows, {@code NAME_lo} and {@code NAME_hi}; a
- *       free row (no bound at all) constrains nothing and is left out, with a comment. A model
- *       with no constraint gets a dummy row {@code 0 x >= -1}.
+ *   <li>A range {@code lo ≤ a·x ≤ up} becomes two rows, {@code NAME_lo} and {@code NAME_hi}; a free
+ *       row (no bound at all) constrains nothing and is left out, with a comment. A model with no
+ *       constraint gets a dummy row {@code 0 x >= -1}.
  *   <li>Every column gets a bounds line with an explicit lower bound; a binary with bounds other
  *       than [0, 1] goes under Generals, because Binaries resets bounds to [0, 1].
  *   <li>Terms are {@code coef name} with a space; lines stay under 255 characters, long rows
@@ -100,7 +100,10 @@ public final class LpWriter {
       Row r = rows.get(i);
       RowSense sense = r.sense();
       if (sense == RowSense.FREE) {
-        out.append("\\ row ").append(names.rows[i]).append(" has no bound and is left out").endLine();
+        out.append("\\ row ")
+            .append(names.rows[i])
+            .append(" has no bound and is left out")
+            .endLine();
         continue;
       }
       switch (sense) {
@@ -118,7 +121,12 @@ public final class LpWriter {
       nonZeros += nonZeroCount(r);
     }
     if (names.dummyRow != null) {
-      out.append(' ').append(names.dummyRow).append(": 0 ").append(firstColumn(names)).append(" >= -1").endLine();
+      out.append(' ')
+          .append(names.dummyRow)
+          .append(": 0 ")
+          .append(firstColumn(names))
+          .append(" >= -1")
+          .endLine();
       written++;
     }
 

@@ -11,14 +11,16 @@ import java.util.Set;
 
 /**
  * Checks, before a single character is written, that every number of a model can be written and
- * read back the same by both outside readers: no NaN or infinite coefficient, no bound on the
- * wrong side of infinity, nothing so large that cbc would read it as infinite, column indices that
- * exist, and unique names.
+ * read back the same by both outside readers: no NaN or infinite coefficient, no bound on the wrong
+ * side of infinity, nothing so large that cbc would read it as infinite, column indices that exist,
+ * and unique names.
  */
 final class ModelCheck {
   private ModelCheck() {}
 
-  /** @throws IllegalArgumentException naming the first offending row or column */
+  /**
+   * @throws IllegalArgumentException naming the first offending row or column
+   */
   static void writable(Milp milp) {
     List<Variable> columns = milp.variables();
     int n = columns.size();
@@ -75,10 +77,12 @@ final class ModelCheck {
     for (int k = 0; k < objective.cols().length; k++) {
       int col = objective.cols()[k];
       if (col < 0 || col >= n) {
-        throw new IllegalArgumentException("objective refers to column index " + col + ", which does not exist");
+        throw new IllegalArgumentException(
+            "objective refers to column index " + col + ", which does not exist");
       }
       if (seen[col]) {
-        throw new IllegalArgumentException("objective lists column " + columns.get(col).name() + " twice");
+        throw new IllegalArgumentException(
+            "objective lists column " + columns.get(col).name() + " twice");
       }
       seen[col] = true;
       coefficient(objective.coefs()[k], "objective, column " + columns.get(col).name());
@@ -88,7 +92,8 @@ final class ModelCheck {
 
   private static void coefficient(double value, String where) {
     if (!Double.isFinite(value)) {
-      throw new IllegalArgumentException(where + ": coefficient " + value + " is not a finite number");
+      throw new IllegalArgumentException(
+          where + ": coefficient " + value + " is not a finite number");
     }
     huge(value, where);
   }

@@ -11,8 +11,8 @@ import java.nio.file.StandardCopyOption;
 import java.util.Optional;
 
 /**
- * Writes a model file so that no reader ever sees half of it: the text goes to a temporary file
- * in the same folder, which then replaces the target in one atomic move. When names had to be
+ * Writes a model file so that no reader ever sees half of it: the text goes to a temporary file in
+ * the same folder, which then replaces the target in one atomic move. When names had to be
  * replaced, the {@link NameMap} goes next to the model as {@code <file>.names}; a stale name map
  * from an earlier write that needed none is removed, so the two never disagree.
  */
@@ -71,7 +71,8 @@ public final class ModelFiles {
   }
 
   /** Streams {@code milp} in {@code format} to any text target. */
-  public static WriteSummary writeTo(Milp milp, Appendable out, ModelFormat format) throws IOException {
+  public static WriteSummary writeTo(Milp milp, Appendable out, ModelFormat format)
+      throws IOException {
     return switch (format) {
       case MPS -> MpsWriter.free().write(milp, out);
       case FIXED_MPS -> MpsWriter.fixed().write(milp, out);

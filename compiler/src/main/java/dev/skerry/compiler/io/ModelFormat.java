@@ -5,8 +5,8 @@ import java.util.Locale;
 
 /**
  * The file formats Skerry writes a {@link dev.skerry.compiler.milp.Milp} to. The format follows
- * from the file name: {@code .fixed.mps} is fixed MPS, any other {@code .mps} free MPS, {@code
- * .lp} the common LP text format.
+ * from the file name: {@code .fixed.mps} is fixed MPS, any other {@code .mps} free MPS, {@code .lp}
+ * the common LP text format.
  */
 public enum ModelFormat {
   /** Free MPS: whitespace-separated fields, names up to 64 characters. */

@@ -17,14 +17,14 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * What {@link MpsReader} has gathered from the sections so far, and how it becomes a {@link
- * Milp} at ENDATA. Read rules (see FORMATS.md for what the outside readers do):
+ * What {@link MpsReader} has gathered from the sections so far, and how it becomes a {@link Milp}
+ * at ENDATA. Read rules (see FORMATS.md for what the outside readers do):
  *
  * <ul>
- *   <li>The objective is the N row named by OBJNAME, else the first N row; any other N row is
- *       kept as a free row.
- *   <li>A RHS on the objective row {@code b} gives the objective constant {@code -b} (cbc reads
- *       it so; glpsol reads {@code +b}, which is why our writers never use it).
+ *   <li>The objective is the N row named by OBJNAME, else the first N row; any other N row is kept
+ *       as a free row.
+ *   <li>A RHS on the objective row {@code b} gives the objective constant {@code -b} (cbc reads it
+ *       so; glpsol reads {@code +b}, which is why our writers never use it).
  *   <li>RANGES: L row {@code [b-|R|, b]}, G row {@code [b, b+|R|]}, E row {@code [b, b+R]} when
  *       {@code R > 0}, else {@code [b+R, b]}. The far end is computed from the RHS as read and the
  *       width as written, in exact decimal arithmetic, and rounded once.
@@ -53,6 +53,7 @@ final class MpsModel {
   private double[] rhs = new double[16];
   private final Map<Integer, BigDecimal> ranges = new HashMap<>();
   private final BitSet rhsSeen = new BitSet();
+
   /** For each row, the last column with an entry in it (columns are contiguous, so enough). */
   private int[] lastColumnOfRow = new int[16];
 
@@ -127,8 +128,11 @@ final class MpsModel {
       if (j != columnNames.size() - 1) {
         throw new ModelFormatException(
             line,
-            "column " + column + " appears again after other columns (first on line "
-                + columns[j].line + "); the entries of a column must be contiguous");
+            "column "
+                + column
+                + " appears again after other columns (first on line "
+                + columns[j].line
+                + "); the entries of a column must be contiguous");
       }
       return j;
     }
@@ -176,21 +180,27 @@ final class MpsModel {
   void setRange(String rowName, BigDecimal width, int line) throws ModelFormatException {
     int row = row(rowName, line);
     if (rowTypes[row] == 'N') {
-      throw new ModelFormatException(line, "row " + rowName + " is an N row and cannot have a range");
+      throw new ModelFormatException(
+          line, "row " + rowName + " is an N row and cannot have a range");
     }
     if (ranges.put(row, width) != null) {
       throw new ModelFormatException(line, "row " + rowName + " gets a second range");
     }
   }
 
-  void setBound(String type, String columnName, double value, int line) throws ModelFormatException {
+  void setBound(String type, String columnName, double value, int line)
+      throws ModelFormatException {
     Integer j = columnIndex.get(columnName);
     if (j == null) {
-      throw new ModelFormatException(line, "bound on column " + columnName + ", which COLUMNS does not list");
+      throw new ModelFormatException(
+          line, "bound on column " + columnName + ", which COLUMNS does not list");
     }
     Column c = columns[j];
     c.anyBound = true;
-    double v = value >= HUGE_BOUND ? Double.POSITIVE_INFINITY : value <= -HUGE_BOUND ? Double.NEGATIVE_INFINITY : value;
+    double v =
+        value >= HUGE_BOUND
+            ? Double.POSITIVE_INFINITY
+            : value <= -HUGE_BOUND ? Double.NEGATIVE_INFINITY : value;
     switch (type) {
       case "UP" -> c.upper = v;
       case "UI" -> {
@@ -227,8 +237,10 @@ final class MpsModel {
         c.lowerGiven = true;
         c.declared = VarType.BINARY;
       }
-      default -> throw new ModelFormatException(
-          line, "bound type " + type + " is not supported (UP, LO, FX, FR, MI, PL, BV, LI, UI are)");
+      default ->
+          throw new ModelFormatException(
+              line,
+              "bound type " + type + " is not supported (UP, LO, FX, FR, MI, PL, BV, LI, UI are)");
     }
   }
 
@@ -248,7 +260,10 @@ final class MpsModel {
   Milp build(NameMap names, int endLine) throws ModelFormatException {
     if (maximizeBySection && maximizeByComment) {
       throw new ModelFormatException(
-          endLine, "the file has both an OBJSENSE section and the comment '" + MpsWriter.SENSE_COMMENT + "'");
+          endLine,
+          "the file has both an OBJSENSE section and the comment '"
+              + MpsWriter.SENSE_COMMENT
+              + "'");
     }
     int objectiveRow = objectiveRow();
     int constantCol = constantColumnIndex(objectiveRow);
@@ -274,7 +289,8 @@ final class MpsModel {
       }
       String full = names.restore(columnNames.get(j));
       if (!seen.add(full)) {
-        throw new ModelFormatException(columns[j].line, "two columns are named " + full + " after the name map");
+        throw new ModelFormatException(
+            columns[j].line, "two columns are named " + full + " after the name map");
       }
       variables.add(variable(columnOf[j], full, columns[j]));
     }
@@ -311,7 +327,8 @@ final class MpsModel {
       }
       String full = names.restore(rowNames.get(i));
       if (!seen.add(full)) {
-        throw new ModelFormatException(rowLines[i], "two rows are named " + full + " after the name map");
+        throw new ModelFormatException(
+            rowLines[i], "two rows are named " + full + " after the name map");
       }
       int[] cols = Arrays.copyOf(rowCols[i], count[i]);
       double[] coefs = Arrays.copyOf(rowCoefs[i], count[i]);
@@ -362,7 +379,10 @@ final class MpsModel {
     Integer j = columnIndex.get(constantColumn);
     if (j == null) {
       throw new ModelFormatException(
-          constantColumnLine, "the comment names column " + constantColumn + " for the objective constant, but COLUMNS does not list it");
+          constantColumnLine,
+          "the comment names column "
+              + constantColumn
+              + " for the objective constant, but COLUMNS does not list it");
     }
     Column c = columns[j];
     boolean onlyObjective = true;
@@ -372,7 +392,9 @@ final class MpsModel {
     if (!onlyObjective || c.markedInteger || c.declared != null || c.lower != 1 || c.upper != 1) {
       throw new ModelFormatException(
           constantColumnLine,
-          "column " + constantColumn + " should carry the objective constant, but it is not a"
+          "column "
+              + constantColumn
+              + " should carry the objective constant, but it is not a"
               + " continuous column fixed at 1 that appears in the objective only");
     }
     return j;
@@ -387,7 +409,8 @@ final class MpsModel {
     if (!c.lowerGiven && upper < 0) {
       lower = Double.NEGATIVE_INFINITY;
     }
-    VarType type = c.declared != null ? c.declared : c.markedInteger ? VarType.INTEGER : VarType.CONTINUOUS;
+    VarType type =
+        c.declared != null ? c.declared : c.markedInteger ? VarType.INTEGER : VarType.CONTINUOUS;
     if (type == VarType.BINARY && (lower < 0 || upper > 1)) {
       type = VarType.INTEGER;
     }
@@ -400,7 +423,8 @@ final class MpsModel {
     BigDecimal r = ranges.get(i);
     return switch (rowTypes[i]) {
       case 'N' -> new double[] {Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY};
-      case 'L' -> new double[] {r == null ? Double.NEGATIVE_INFINITY : shifted(b, r.abs().negate()), b};
+      case 'L' ->
+          new double[] {r == null ? Double.NEGATIVE_INFINITY : shifted(b, r.abs().negate()), b};
       case 'G' -> new double[] {b, r == null ? Double.POSITIVE_INFINITY : shifted(b, r.abs())};
       default -> {
         if (r == null || r.signum() == 0) {

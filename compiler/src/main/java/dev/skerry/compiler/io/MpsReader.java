@@ -4,24 +4,22 @@ import dev.skerry.compiler.milp.Milp;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
 /**
- * Reads free or fixed MPS into a {@link Milp}. Sections NAME, ROWS, COLUMNS, RHS, RANGES,
- * BOUNDS, ENDATA in this order, with OBJSENSE and OBJNAME tolerated anywhere before ENDATA;
- * integer markers; bound types UP, LO, FX, FR, MI, PL, BV, LI, UI. How values turn into bounds
- * is documented on {@link MpsModel}.
+ * Reads free or fixed MPS into a {@link Milp}. Sections NAME, ROWS, COLUMNS, RHS, RANGES, BOUNDS,
+ * ENDATA in this order, with OBJSENSE and OBJNAME tolerated anywhere before ENDATA; integer
+ * markers; bound types UP, LO, FX, FR, MI, PL, BV, LI, UI. How values turn into bounds is
+ * documented on {@link MpsModel}.
  *
  * <p>Free MPS splits lines at blanks; a RHS or RANGES line may leave out its set name. Fixed MPS
- * reads fields by column (2-3, 5-12, 15-22, 25-36, 40-47, 50-61; GLPK reference manual,
- * appendix B), so names may hold blanks; a blank column name continues the previous column, and
- * a {@code $} at the start of field 3 or 5 makes the rest of the line a comment.
+ * reads fields by column (2-3, 5-12, 15-22, 25-36, 40-47, 50-61; GLPK reference manual, appendix
+ * B), so names may hold blanks; a blank column name continues the previous column, and a {@code $}
+ * at the start of field 3 or 5 makes the rest of the line a comment.
  *
  * <p>The two header comments {@link MpsWriter} writes are understood: a maximisation written
  * negated is read back as the maximisation, and the column carrying the objective constant is
@@ -123,7 +121,7 @@ public final class MpsReader {
   }
 
   private void header(String text) throws ModelFormatException {
-    List<String> words = split(text);
+    List<String> words = MpsFields.split(text);
     String keyword = words.get(0).toUpperCase(Locale.ROOT);
     expectSense = false;
     expectObjectiveName = false;
@@ -157,17 +155,25 @@ public final class MpsReader {
           expectObjectiveName = true;
         }
       }
-      default -> throw new ModelFormatException(
-          lineNo,
-          "unknown section '" + words.get(0) + "' (expected NAME, ROWS, COLUMNS, RHS, RANGES,"
-              + " BOUNDS, OBJSENSE, OBJNAME or ENDATA)");
+      default ->
+          throw new ModelFormatException(
+              lineNo,
+              "unknown section '"
+                  + words.get(0)
+                  + "' (expected NAME, ROWS, COLUMNS, RHS, RANGES,"
+                  + " BOUNDS, OBJSENSE, OBJNAME or ENDATA)");
     }
   }
 
   private void enter(Section next, String text) throws ModelFormatException {
     if (next.ordinal() <= section.ordinal()) {
       throw new ModelFormatException(
-          lineNo, "section " + text.trim() + " comes after " + section + "; the order is NAME,"
+          lineNo,
+          "section "
+              + text.trim()
+              + " comes after "
+              + section
+              + "; the order is NAME,"
               + " ROWS, COLUMNS, RHS, RANGES, BOUNDS, ENDATA");
     }
     section = next;
@@ -209,8 +215,9 @@ public final class MpsReader {
       case RHS -> valuesLine(text, Section.RHS);
       case RANGES -> valuesLine(text, Section.RANGES);
       case BOUNDS -> boundsLine(text);
-      default -> throw new ModelFormatException(
-          lineNo, "data line outside a section (section headers start in column 1)");
+      default ->
+          throw new ModelFormatException(
+              lineNo, "data line outside a section (section headers start in column 1)");
     }
   }
 
@@ -218,11 +225,11 @@ public final class MpsReader {
     String type;
     String name;
     if (fixed) {
-      String[] f = fixedFields(text);
+      String[] f = MpsFields.fixed(text, lineNo);
       type = f[0];
       name = f[1];
     } else {
-      List<String> t = split(text);
+      List<String> t = MpsFields.split(text);
       expectCount(t, 2, 2, "a row type and a row name");
       type = t.get(0);
       name = t.get(1);
@@ -237,18 +244,19 @@ public final class MpsReader {
     String column;
     String[] pairs;
     if (fixed) {
-      String[] f = fixedFields(text);
+      String[] f = MpsFields.fixed(text, lineNo);
       if (MARKER.equals(f[2])) {
         marker(f[4]);
         return;
       }
       column = f[1].isEmpty() ? currentColumnName : f[1];
       if (column == null) {
-        throw new ModelFormatException(lineNo, "this COLUMNS line needs a column name (there is none to continue)");
+        throw new ModelFormatException(
+            lineNo, "this COLUMNS line needs a column name (there is none to continue)");
       }
       pairs = new String[] {f[2], f[3], f[4], f[5]};
     } else {
-      List<String> t = split(text);
+      List<String> t = MpsFields.split(text);
       if (t.size() == 3 && MARKER.equals(t.get(1))) {
         marker(t.get(2));
         return;
@@ -258,7 +266,10 @@ public final class MpsReader {
         throw new ModelFormatException(lineNo, "a row name without a value");
       }
       column = t.get(0);
-      pairs = new String[] {t.get(1), t.get(2), t.size() > 3 ? t.get(3) : "", t.size() > 4 ? t.get(4) : ""};
+      pairs =
+          new String[] {
+            t.get(1), t.get(2), t.size() > 3 ? t.get(3) : "", t.size() > 4 ? t.get(4) : ""
+          };
     }
     if (!column.equals(currentColumnName)) {
       currentColumn = model.openColumn(column, inIntegers, lineNo);
@@ -271,7 +282,7 @@ public final class MpsReader {
       if (pairs[p].isEmpty() || pairs[p + 1].isEmpty()) {
         throw new ModelFormatException(lineNo, "expected a row name and a value");
       }
-      model.addEntry(currentColumn, pairs[p], number(pairs[p + 1]), lineNo);
+      model.addEntry(currentColumn, pairs[p], MpsFields.number(pairs[p + 1], lineNo), lineNo);
     }
   }
 
@@ -289,8 +300,9 @@ public final class MpsReader {
         }
         inIntegers = false;
       }
-      default -> throw new ModelFormatException(
-          lineNo, "unknown marker " + kind + " ('INTORG' and 'INTEND' are known)");
+      default ->
+          throw new ModelFormatException(
+              lineNo, "unknown marker " + kind + " ('INTORG' and 'INTEND' are known)");
     }
     currentColumnName = null;
   }
@@ -300,11 +312,11 @@ public final class MpsReader {
     String set;
     String[] pairs;
     if (fixed) {
-      String[] f = fixedFields(text);
+      String[] f = MpsFields.fixed(text, lineNo);
       set = f[1];
       pairs = new String[] {f[2], f[3], f[4], f[5]};
     } else {
-      List<String> t = split(text);
+      List<String> t = MpsFields.split(text);
       expectCount(t, 2, 5, "an optional set name and one or two (row, value) pairs");
       int first = t.size() % 2;
       set = first == 1 ? t.get(0) : "";
@@ -322,9 +334,9 @@ public final class MpsReader {
         throw new ModelFormatException(lineNo, "expected a row name and a value");
       }
       if (which == Section.RHS) {
-        model.setRhs(pairs[p], number(pairs[p + 1]), lineNo);
+        model.setRhs(pairs[p], MpsFields.number(pairs[p + 1], lineNo), lineNo);
       } else {
-        model.setRange(pairs[p], decimal(pairs[p + 1]), lineNo);
+        model.setRange(pairs[p], MpsFields.decimal(pairs[p + 1], lineNo), lineNo);
       }
     }
   }
@@ -335,13 +347,13 @@ public final class MpsReader {
     String column;
     String value;
     if (fixed) {
-      String[] f = fixedFields(text);
+      String[] f = MpsFields.fixed(text, lineNo);
       type = f[0];
       set = f[1];
       column = f[2];
       value = f[3];
     } else {
-      List<String> t = split(text);
+      List<String> t = MpsFields.split(text);
       expectCount(t, 2, 4, "a bound type, an optional set name, a column and maybe a value");
       type = t.get(0);
       boolean needsValue = BoundType.needsValue(type);
@@ -354,7 +366,9 @@ public final class MpsReader {
         column = t.get(1);
         value = "";
       } else if (needsValue
-          || (type.equalsIgnoreCase("BV") && model.hasColumn(t.get(1)) && !model.hasColumn(t.get(2)))) {
+          || (type.equalsIgnoreCase("BV")
+              && model.hasColumn(t.get(1))
+              && !model.hasColumn(t.get(2)))) {
         set = "";
         column = t.get(1);
         value = t.get(2);
@@ -372,11 +386,12 @@ public final class MpsReader {
     double v = 0;
     if (BoundType.needsValue(type)) {
       if (value.isEmpty()) {
-        throw new ModelFormatException(lineNo, "bound " + type + " on column " + column + " needs a value");
+        throw new ModelFormatException(
+            lineNo, "bound " + type + " on column " + column + " needs a value");
       }
-      v = number(value);
+      v = MpsFields.number(value, lineNo);
     } else if (!value.isEmpty()) {
-      number(value);
+      MpsFields.number(value, lineNo);
     }
     model.setBound(type, column, v, lineNo);
   }
@@ -394,126 +409,22 @@ public final class MpsReader {
       sets[which.ordinal()] = set;
     } else if (!first.equals(set)) {
       throw new ModelFormatException(
-          lineNo, which + " set '" + set + "' differs from the first set '" + first + "'; only one set is read");
+          lineNo,
+          which
+              + " set '"
+              + set
+              + "' differs from the first set '"
+              + first
+              + "'; only one set is read");
     }
   }
 
-  /** Fields 1 to 6 of a fixed-MPS line, trimmed, blank when absent. */
-  private String[] fixedFields(String text) throws ModelFormatException {
-    int[][] spans = {{1, 3}, {4, 12}, {14, 22}, {24, 36}, {39, 47}, {49, 61}};
-    int end = text.length();
-    if (end > 14 && text.charAt(14) == '$') {
-      end = 14;
-    } else if (end > 39 && text.charAt(39) == '$') {
-      end = 39;
-    }
-    end = Math.min(end, 61);
-    String[] fields = new String[6];
-    int previous = 0;
-    for (int k = 0; k < 6; k++) {
-      int from = spans[k][0];
-      int to = spans[k][1];
-      for (int c = previous; c < Math.min(from, end); c++) {
-        if (!Character.isWhitespace(text.charAt(c))) {
-          throw new ModelFormatException(
-              lineNo,
-              "text in column " + (c + 1) + " falls between the fields of fixed MPS (columns 2-3,"
-                  + " 5-12, 15-22, 25-36, 40-47, 50-61); is this free MPS?");
-        }
-      }
-      fields[k] = from < end ? text.substring(from, Math.min(to, end)).trim() : "";
-      previous = to;
-    }
-    return fields;
-  }
-
-  private void expectCount(List<String> t, int min, int max, String what) throws ModelFormatException {
+  private void expectCount(List<String> t, int min, int max, String what)
+      throws ModelFormatException {
     if (t.size() < min || t.size() > max) {
-      throw new ModelFormatException(lineNo, "expected " + what + ", found " + t.size() + " fields");
+      throw new ModelFormatException(
+          lineNo, "expected " + what + ", found " + t.size() + " fields");
     }
-  }
-
-  private static List<String> split(String text) {
-    List<String> words = new ArrayList<>(6);
-    int i = 0;
-    int n = text.length();
-    while (i < n) {
-      while (i < n && Character.isWhitespace(text.charAt(i))) {
-        i++;
-      }
-      int start = i;
-      while (i < n && !Character.isWhitespace(text.charAt(i))) {
-        i++;
-      }
-      if (i > start) {
-        words.add(text.substring(start, i));
-      }
-    }
-    return words;
-  }
-
-  private double number(String text) throws ModelFormatException {
-    String normal = checkedNumber(text);
-    double v = Double.parseDouble(normal);
-    if (Double.isInfinite(v)) {
-      throw new ModelFormatException(lineNo, "number " + text + " is out of range");
-    }
-    return v;
-  }
-
-  private BigDecimal decimal(String text) throws ModelFormatException {
-    String normal = checkedNumber(text);
-    try {
-      return new BigDecimal(normal);
-    } catch (NumberFormatException e) {
-      throw new ModelFormatException(lineNo, "number " + text + " is out of range");
-    }
-  }
-
-  /**
-   * The text of a plain decimal number ({@code -12}, {@code .5}, {@code 2.5E-7}, Fortran's
-   * {@code 1.5D3}), with a D exponent turned into E; anything else is refused.
-   */
-  private String checkedNumber(String text) throws ModelFormatException {
-    int i = 0;
-    int n = text.length();
-    if (i < n && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
-      i++;
-    }
-    int digits = 0;
-    while (i < n && Character.isDigit(text.charAt(i))) {
-      i++;
-      digits++;
-    }
-    if (i < n && text.charAt(i) == '.') {
-      i++;
-      while (i < n && Character.isDigit(text.charAt(i))) {
-        i++;
-        digits++;
-      }
-    }
-    boolean ok = digits > 0;
-    int exponentAt = -1;
-    if (ok && i < n && "eEdD".indexOf(text.charAt(i)) >= 0) {
-      exponentAt = i;
-      i++;
-      if (i < n && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
-        i++;
-      }
-      int expDigits = 0;
-      while (i < n && Character.isDigit(text.charAt(i))) {
-        i++;
-        expDigits++;
-      }
-      ok = expDigits > 0;
-    }
-    if (!ok || i != n) {
-      throw new ModelFormatException(lineNo, "'" + text + "' is not a number");
-    }
-    if (exponentAt >= 0 && (text.charAt(exponentAt) == 'd' || text.charAt(exponentAt) == 'D')) {
-      return text.substring(0, exponentAt) + 'E' + text.substring(exponentAt + 1);
-    }
-    return text;
   }
 
   /** Which bound types carry a value. */

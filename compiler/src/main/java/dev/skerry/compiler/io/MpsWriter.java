@@ -16,8 +16,8 @@ import java.util.Optional;
  * <ul>
  *   <li>Sections NAME, ROWS, COLUMNS, RHS (header always), RANGES, BOUNDS, ENDATA; the free NAME
  *       line carries the word {@code FREE}.
- *   <li>Minimisation only: a maximisation is written as the minimisation of the negated
- *       objective, said in a header comment and in {@link WriteSummary#objectiveNegated()}.
+ *   <li>Minimisation only: a maximisation is written as the minimisation of the negated objective,
+ *       said in a header comment and in {@link WriteSummary#objectiveNegated()}.
  *   <li>The objective constant is the cost of a column fixed at 1 (both readers disagree on the
  *       sign of an objective RHS); a header comment names that column so that {@link MpsReader}
  *       folds it back into the constant.
@@ -163,7 +163,10 @@ public final class MpsWriter {
         out.append("* ")
             .append(Integer.toString(count))
             .append(count == 1 ? " name" : " names")
-            .append(fixed ? " that fixed MPS cannot hold (over 8 characters," : " that free MPS cannot hold (over 64 characters,")
+            .append(
+                fixed
+                    ? " that fixed MPS cannot hold (over 8 characters,"
+                    : " that free MPS cannot hold (over 64 characters,")
             .append(" blanks or unusual characters) ")
             .append(count == 1 ? "was replaced by an alias" : "were replaced by aliases")
             .append("; the name map lists them.")
@@ -204,7 +207,10 @@ public final class MpsWriter {
         String column = names.columns[j];
         boolean any = false;
         if (cost[j] != 0) {
-          entry(column, names.objectiveRow, number(cost[j], "objective coefficient of column", v, -1));
+          entry(
+              column,
+              names.objectiveRow,
+              number(cost[j], "objective coefficient of column", v, -1));
           any = true;
         }
         for (int k = matrix.start[j]; k < matrix.start[j + 1]; k++) {
@@ -221,7 +227,10 @@ public final class MpsWriter {
         marker("'INTEND'");
       }
       if (names.constantColumn != null) {
-        entry(names.constantColumn, names.objectiveRow, number(constant, "objective constant", null, -1));
+        entry(
+            names.constantColumn,
+            names.objectiveRow,
+            number(constant, "objective constant", null, -1));
         closeEntries();
       }
     }
@@ -229,7 +238,13 @@ public final class MpsWriter {
     private void marker(String kind) throws IOException {
       closeEntries();
       if (fixed) {
-        out.append("    ").append(MARKER).padTo(14).append("'MARKER'").padTo(39).append(kind).endLine();
+        out.append("    ")
+            .append(MARKER)
+            .padTo(14)
+            .append("'MARKER'")
+            .padTo(39)
+            .append(kind)
+            .endLine();
       } else {
         out.append("    ").append(MARKER).append("  'MARKER'  ").append(kind).endLine();
       }
@@ -267,10 +282,16 @@ public final class MpsWriter {
         }
         double near = form.rhs(r);
         double far = form == RowForm.RANGE_FROM_LOWER ? r.upper() : r.lower();
-        String width = NumberText.rangeWidth(near, far, fixed ? NumberText.FIXED_WIDTH : Integer.MAX_VALUE);
+        String width =
+            NumberText.rangeWidth(near, far, fixed ? NumberText.FIXED_WIDTH : Integer.MAX_VALUE);
         if (width == null) {
           throw new IllegalArgumentException(
-              "row " + r.name() + ": the range [" + r.lower() + ", " + r.upper()
+              "row "
+                  + r.name()
+                  + ": the range ["
+                  + r.lower()
+                  + ", "
+                  + r.upper()
                   + "] needs a RANGES entry longer than 12 characters to read back exactly;"
                   + " write free MPS instead");
         }
@@ -365,7 +386,9 @@ public final class MpsWriter {
         throw new IllegalArgumentException(
             what
                 + (column == null ? "" : " " + column.name())
-                + (row < 0 ? "" : (column == null ? " of row " : " in row ") + milp.rows().get(row).name())
+                + (row < 0
+                    ? ""
+                    : (column == null ? " of row " : " in row ") + milp.rows().get(row).name())
                 + ": "
                 + v
                 + " needs more than 12 characters to read back exactly; write free MPS instead");
@@ -396,9 +419,10 @@ public final class MpsWriter {
         case FREE -> FREE;
         case LE -> LESS;
         case GE -> GREATER;
-        // -0.0 and 0.0 compare equal but are kept apart: write such a row as a range of width 0.
+          // -0.0 and 0.0 compare equal but are kept apart: write such a row as a range of width 0.
         case EQ -> Double.compare(r.lower(), r.upper()) == 0 ? EQUAL : RANGE_FROM_LOWER;
-        case RANGE -> Math.abs(r.lower()) <= Math.abs(r.upper()) ? RANGE_FROM_LOWER : RANGE_FROM_UPPER;
+        case RANGE ->
+            Math.abs(r.lower()) <= Math.abs(r.upper()) ? RANGE_FROM_LOWER : RANGE_FROM_UPPER;
       };
     }
 

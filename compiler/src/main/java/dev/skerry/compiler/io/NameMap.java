@@ -14,11 +14,11 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * The names a writer had to replace: each entry pairs the name written in the file (the alias)
- * with the model's full name. Aliases are unique across rows and columns of one file, so one
- * look-up serves both. Written as a small text file, one {@code alias<TAB>fullname} per line, in
- * the order the writer met the names; a backslash, tab, carriage return or line feed inside a
- * full name is escaped as {@code \\}, {@code \t}, {@code \r}, {@code \n}.
+ * The names a writer had to replace: each entry pairs the name written in the file (the alias) with
+ * the model's full name. Aliases are unique across rows and columns of one file, so one look-up
+ * serves both. Written as a small text file, one {@code alias<TAB>fullname} per line, in the order
+ * the writer met the names; a backslash, tab, carriage return or line feed inside a full name is
+ * escaped as {@code \\}, {@code \t}, {@code \r}, {@code \n}.
  */
 public final class NameMap {
   /** A map with no entries: no name was changed. */
@@ -100,7 +100,8 @@ public final class NameMap {
       }
       int tab = text.indexOf('\t');
       if (tab <= 0) {
-        throw new ModelFormatException(lineNo, "expected 'alias<TAB>full name', found '" + text + "'");
+        throw new ModelFormatException(
+            lineNo, "expected 'alias<TAB>full name', found '" + text + "'");
       }
       String alias = text.substring(0, tab);
       Integer earlier = seen.put(alias, lineNo);
@@ -153,7 +154,8 @@ public final class NameMap {
         case 't' -> out.append('\t');
         case 'n' -> out.append('\n');
         case 'r' -> out.append('\r');
-        default -> throw new ModelFormatException(lineNo, "unknown escape \\" + next + " in full name");
+        default ->
+            throw new ModelFormatException(lineNo, "unknown escape \\" + next + " in full name");
       }
     }
     return out.toString();

@@ -123,8 +123,8 @@ final class NumberText {
 
   /**
    * The RANGES entry for a row {@code lo ≤ a·x ≤ up} written with its right-hand side at one end
-   * ({@code near}): the width {@code R} with the fewest significant digits such that the other
-   * end, computed as the exact decimal sum {@code near ± R} rounded once to a double (what {@link
+   * ({@code near}): the width {@code R} with the fewest significant digits such that the other end,
+   * computed as the exact decimal sum {@code near ± R} rounded once to a double (what {@link
    * MpsReader} does), is exactly {@code far}. Returns null when that text does not fit in {@code
    * maxLength} characters.
    */

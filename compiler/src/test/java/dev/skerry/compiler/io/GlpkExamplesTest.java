@@ -25,9 +25,9 @@ import org.junit.jupiter.params.provider.MethodSource;
  * GLPK's own example models (fixed MPS, shipped with the Debian package glpk-utils under
  * /usr/share/doc/glpk-utils/examples): our reader reads each, our writers write it back in all
  * three formats, and {@code glpsol} 5.0 (glpk-utils) finds the same optimum for the original and
- * for every copy. Where the file's header states its optimum ({@code *OPT SOLN:}), glpsol's
- * optimum must match it to the digits stated. murtagh.mps says in its header that it is a
- * maximisation but carries no sense, so it is solved with {@code --max} and read as one.
+ * for every copy. Where the file's header states its optimum ({@code *OPT SOLN:}), glpsol's optimum
+ * must match it to the digits stated. murtagh.mps says in its header that it is a maximisation but
+ * carries no sense, so it is solved with {@code --max} and read as one.
  */
 class GlpkExamplesTest {
   static final Path EXAMPLES = Path.of("/usr/share/doc/glpk-utils/examples");
@@ -48,7 +48,10 @@ class GlpkExamplesTest {
     for (String name : NAMES) {
       Path file = EXAMPLES.resolve(name + ".mps");
       if (!Files.isReadable(file)) {
-        fail(file + " is missing: install the Debian package glpk-utils, which ships GLPK's examples");
+        fail(
+            file
+                + " is missing: install the Debian package glpk-utils, which ships GLPK's"
+                + " examples");
       }
     }
   }
@@ -61,7 +64,9 @@ class GlpkExamplesTest {
     OutsideSolvers.Result reference =
         OutsideSolvers.glpsolObjective(original, ModelFormat.FIXED_MPS, maximize);
     assertEquals(
-        OutsideSolvers.Status.OPTIMAL, reference.status(), "glpsol on the original: " + reference.detail());
+        OutsideSolvers.Status.OPTIMAL,
+        reference.status(),
+        "glpsol on the original: " + reference.detail());
     String text = Files.readString(original, StandardCharsets.ISO_8859_1);
     Matcher stated = STATED_OPTIMUM.matcher(text);
     if (stated.find()) {
@@ -78,7 +83,9 @@ class GlpkExamplesTest {
       ModelFiles.Written written = ModelFiles.write(milp, copy, format);
       OutsideSolvers.Result result = OutsideSolvers.glpsolObjective(copy, format);
       assertEquals(
-          OutsideSolvers.Status.OPTIMAL, result.status(), "glpsol on our " + format + " copy: " + result.detail());
+          OutsideSolvers.Status.OPTIMAL,
+          result.status(),
+          "glpsol on our " + format + " copy: " + result.detail());
       double optimum = written.summary().modelObjective(result.objective());
       assertTrue(
           OutsideSolvers.sameOptimum(reference.objective(), optimum),
@@ -88,13 +95,17 @@ class GlpkExamplesTest {
 
   /** The example as our reader reads it; a known maximisation gets its sense. */
   private static Milp read(String name) throws IOException {
-    Milp milp = MpsReader.read(EXAMPLES.resolve(name + ".mps"), ModelFormat.FIXED_MPS, NameMap.EMPTY);
+    Milp milp =
+        MpsReader.read(EXAMPLES.resolve(name + ".mps"), ModelFormat.FIXED_MPS, NameMap.EMPTY);
     if (!MAXIMISATIONS.contains(name)) {
       return milp;
     }
     Objective o = milp.objective();
     return new Milp(
-        milp.name(), milp.variables(), milp.rows(), new Objective(false, o.cols(), o.coefs(), o.constant()));
+        milp.name(),
+        milp.variables(),
+        milp.rows(),
+        new Objective(false, o.cols(), o.coefs(), o.constant()));
   }
 
   /** Free MPS names hold no blanks: a model name with blanks comes back with underscores. */
@@ -105,7 +116,8 @@ class GlpkExamplesTest {
     Path copy = folder.resolve(name + ".mps");
     ModelFiles.Written written = ModelFiles.write(milp, copy, ModelFormat.MPS);
     Milp back = MpsReader.read(copy, ModelFormat.MPS, written.summary().names());
-    Milp expected = new Milp(milp.name().replace(' ', '_'), milp.variables(), milp.rows(), milp.objective());
+    Milp expected =
+        new Milp(milp.name().replace(' ', '_'), milp.variables(), milp.rows(), milp.objective());
     MilpAssertions.assertSameModel(expected, back);
   }
 }

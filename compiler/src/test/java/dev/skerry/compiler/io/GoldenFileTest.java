@@ -20,21 +20,21 @@ import org.junit.jupiter.params.provider.EnumSource;
 /**
  * The files written for one small model, compared with the reviewed copies under
  * src/test/resources/.../golden. They change only when someone asks for it with {@code
- * -Dskerry.golden.update=true}, and then the diff is reviewed like code. The checked-in copies
- * are also solved by the outside judges ({@code cbc} 2.10 from coinor-cbc, {@code glpsol} 5.0
- * from glpk-utils), which must find the optimum worked out by hand below.
+ * -Dskerry.golden.update=true}, and then the diff is reviewed like code. The checked-in copies are
+ * also solved by the outside judges ({@code cbc} 2.10 from coinor-cbc, {@code glpsol} 5.0 from
+ * glpk-utils), which must find the optimum worked out by hand below.
  */
 class GoldenFileTest {
   static final Path GOLDEN = Path.of("src/test/resources/dev/skerry/compiler/io/golden");
   static final boolean UPDATE = Boolean.getBoolean("skerry.golden.update");
 
   /**
-   * max 3x + 2b - n + 0.5 f + 10 subject to cap: x + 4b + n ≤ 9.5, link: x - f = 0.5, floor:
-   * x + n ≥ -1, band[1]: -2 ≤ 2x - n ≤ 8; x in [0, 4], b binary, n integer in [-3, 5], f free.
+   * max 3x + 2b - n + 0.5 f + 10 subject to cap: x + 4b + n ≤ 9.5, link: x - f = 0.5, floor: x + n
+   * ≥ -1, band[1]: -2 ≤ 2x - n ≤ 8; x in [0, 4], b binary, n integer in [-3, 5], f free.
    *
    * <p>By hand: f = x - 0.5 turns the objective into 3.5x + 2b - n + 9.75. n must be at least
-   * max(-3, -1 - x, 2x - 8), so each unit of x costs at most 2 in n and gains 3.5: x = 4, n = 0,
-   * b = 1 (cap: 8 ≤ 9.5), objective 14 + 2 - 0 + 9.75 = 25.75.
+   * max(-3, -1 - x, 2x - 8), so each unit of x costs at most 2 in n and gains 3.5: x = 4, n = 0, b
+   * = 1 (cap: 8 ≤ 9.5), objective 14 + 2 - 0 + 9.75 = 25.75.
    */
   static final double OPTIMUM = 25.75;
 
@@ -44,7 +44,9 @@ class GoldenFileTest {
     Variable x = b.newContinuous("x", 0, 4, o);
     Variable bin = b.newBinary("b", o);
     Variable n = b.newInteger("n", -3, 5, o);
-    Variable f = b.newContinuous("offset_of_the_reference_point", Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, o);
+    Variable f =
+        b.newContinuous(
+            "offset_of_the_reference_point", Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, o);
     b.addLessOrEqual("cap", LinearExpr.of(x).add(bin, 4).add(n), 9.5, o);
     b.addEquality("link", LinearExpr.of(x).add(f, -1), 0.5, o);
     b.addGreaterOrEqual("floor", LinearExpr.of(x).add(n), -1, o);
@@ -63,7 +65,9 @@ class GoldenFileTest {
     summary.names().write(names);
     Path mapFile = GOLDEN.resolve("small" + format.extension() + ModelFiles.NAME_MAP_SUFFIX);
     if (summary.names().isEmpty()) {
-      assertTrue(!Files.exists(mapFile) || UPDATE && deleted(mapFile), mapFile + " should not exist: no name changed");
+      assertTrue(
+          !Files.exists(mapFile) || UPDATE && deleted(mapFile),
+          mapFile + " should not exist: no name changed");
     } else {
       compare(mapFile, names.toString());
     }
@@ -81,7 +85,8 @@ class GoldenFileTest {
         new OutsideSolvers.Result[] {
           OutsideSolvers.cbcObjective(file), OutsideSolvers.glpsolObjective(file, format)
         }) {
-      assertEquals(OutsideSolvers.Status.OPTIMAL, result.status(), result.solver() + ": " + result.detail());
+      assertEquals(
+          OutsideSolvers.Status.OPTIMAL, result.status(), result.solver() + ": " + result.detail());
       assertTrue(
           OutsideSolvers.sameOptimum(-OPTIMUM, result.objective()),
           result.solver() + " on " + file.getFileName() + " gives " + result.objective());
@@ -100,7 +105,8 @@ class GoldenFileTest {
     assertEquals(
         Files.readString(golden, StandardCharsets.US_ASCII),
         actual,
-        golden + " differs; if the change is intended, regenerate with -Dskerry.golden.update=true"
+        golden
+            + " differs; if the change is intended, regenerate with -Dskerry.golden.update=true"
             + " and review the diff");
   }
 

@@ -21,8 +21,8 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
 
 /**
  * The writers stream: a model of 400,000 binaries and 1,000,000 rows is written in all three
- * formats by a JVM limited to 1 GB of heap. Slow (about a minute), so it runs only when asked
- * for with {@code -Dskerry.io.large=true}.
+ * formats by a JVM limited to 1 GB of heap. Slow (about a minute), so it runs only when asked for
+ * with {@code -Dskerry.io.large=true}.
  */
 class LargeModelTest {
   static final int BINARIES = 400_000;
@@ -37,11 +37,16 @@ class LargeModelTest {
       String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
       Process process =
           new ProcessBuilder(
-                  java, "-Xmx1g", "-cp", System.getProperty("java.class.path"), LargeModelTest.class.getName())
+                  java,
+                  "-Xmx1g",
+                  "-cp",
+                  System.getProperty("java.class.path"),
+                  LargeModelTest.class.getName())
               .redirectErrorStream(true)
               .redirectOutput(log.toFile())
               .start();
-      assertTrue(process.waitFor(15, TimeUnit.MINUTES), "the large write did not finish in 15 minutes");
+      assertTrue(
+          process.waitFor(15, TimeUnit.MINUTES), "the large write did not finish in 15 minutes");
       String output = Files.readString(log);
       System.out.print(output);
       assertEquals(0, process.exitValue(), output);
@@ -74,9 +79,9 @@ class LargeModelTest {
   }
 
   /**
-   * Shaped like a trajectory model: per step, position-like continuous columns; per zone and
-   * step, binaries; each row ties one binary to two continuous columns (a big-M side) or sums
-   * four binaries (at least one side active). Long names, so fixed MPS aliases all of them.
+   * Shaped like a trajectory model: per step, position-like continuous columns; per zone and step,
+   * binaries; each row ties one binary to two continuous columns (a big-M side) or sums four
+   * binaries (at least one side active). Long names, so fixed MPS aliases all of them.
    */
   static Milp build() {
     MilpBuilder b = new MilpBuilder("large");
@@ -87,14 +92,17 @@ class LargeModelTest {
     }
     List<Variable> bins = new ArrayList<>(BINARIES);
     for (int j = 0; j < BINARIES; j++) {
-      bins.add(b.newBinary("avoid_zone" + (j / 4 % 1000) + "_step" + (j / 4000) + "_side" + (j % 4), o));
+      bins.add(
+          b.newBinary("avoid_zone" + (j / 4 % 1000) + "_step" + (j / 4000) + "_side" + (j % 4), o));
     }
     int sums = BINARIES / 4;
     for (int i = 0; i < ROWS - sums; i++) {
       Variable bin = bins.get(i % BINARIES);
       b.addLessOrEqual(
           "side_" + i,
-          LinearExpr.of(cont.get(i % CONTINUOUS), 1).add(cont.get((i * 7 + 1) % CONTINUOUS), -0.5).add(bin, -2000),
+          LinearExpr.of(cont.get(i % CONTINUOUS), 1)
+              .add(cont.get((i * 7 + 1) % CONTINUOUS), -0.5)
+              .add(bin, -2000),
           12.5,
           o);
     }

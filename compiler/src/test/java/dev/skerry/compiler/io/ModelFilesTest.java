@@ -90,7 +90,8 @@ class ModelFilesTest {
 
   @Test
   void aNameMapKeepsNamesWithTabsAndBackslashes() throws IOException {
-    NameMap map = new NameMap.Builder().add("C0000001", "a\tb\\c\nd").add("C0000002", "plain").build();
+    NameMap map =
+        new NameMap.Builder().add("C0000001", "a\tb\\c\nd").add("C0000002", "plain").build();
     Path file = folder.resolve("m.names");
     map.writeTo(file);
     NameMap back = NameMap.readFrom(file);

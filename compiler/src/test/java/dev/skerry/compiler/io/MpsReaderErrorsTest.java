@@ -84,7 +84,8 @@ class MpsReaderErrorsTest {
     assertEquals(10, failure(GOOD.replace("UP BND  x", "UP BND  y")).line(), "unknown column");
     assertEquals(10, failure(GOOD.replace("UP BND", "SC BND")).line(), "unsupported bound");
     assertEquals(8, failure(GOOD.replace("lim  4", "lim  4  lim  5")).line(), "second rhs");
-    assertEquals(4, failure(GOOD.replace("ROWS\n", "ROWS\n N  cost\n")).line(), "row declared twice");
+    assertEquals(
+        4, failure(GOOD.replace("ROWS\n", "ROWS\n N  cost\n")).line(), "row declared twice");
     assertEquals(6, failure(GOOD.replace("lim  2", "cost  2")).line(), "second entry in a row");
     assertEquals(7, failure(GOOD.replace("RHS\n", "COLUMNS\n")).line(), "section out of order");
     assertEquals(3, failure(GOOD.replace(" N  cost", "N  cost")).line(), "data in column 1");
@@ -103,7 +104,9 @@ class MpsReaderErrorsTest {
   void fixedMpsWithTextBetweenFieldsAsksWhetherItIsFree() {
     String text = "NAME          T\nROWS\n N  COST\nCOLUMNS\n    XVAR  COST  1\nENDATA\n";
     ModelFormatException e =
-        assertThrows(ModelFormatException.class, () -> MpsReader.read(new StringReader(text), ModelFormat.FIXED_MPS));
+        assertThrows(
+            ModelFormatException.class,
+            () -> MpsReader.read(new StringReader(text), ModelFormat.FIXED_MPS));
     assertEquals(5, e.line());
     assertTrue(e.getMessage().contains("is this free MPS"), e.getMessage());
   }
@@ -200,7 +203,9 @@ class MpsReaderErrorsTest {
   @Test
   void aBrokenNameMapLineIsReported() {
     ModelFormatException e =
-        assertThrows(ModelFormatException.class, () -> NameMap.read(new StringReader("C0000001\tlong\nnotab\n")));
+        assertThrows(
+            ModelFormatException.class,
+            () -> NameMap.read(new StringReader("C0000001\tlong\nnotab\n")));
     assertEquals(2, e.line());
   }
 }

@@ -38,7 +38,12 @@ class MpsRoundTripTest {
    */
   static Milp awkwardModel() {
     MilpBuilder b = new MilpBuilder("awkward");
-    Variable a = b.newContinuous("a column name well over sixty-four characters long, with blanks in it", -1.0 / 3, 2.0 / 3, O);
+    Variable a =
+        b.newContinuous(
+            "a column name well over sixty-four characters long, with blanks in it",
+            -1.0 / 3,
+            2.0 / 3,
+            O);
     Variable c = b.newContinuous("c", Double.NEGATIVE_INFINITY, -0.1, O);
     Variable f = b.newContinuous("f", Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, O);
     Variable n = b.newInteger("n", -7, Double.POSITIVE_INFINITY, O);
@@ -77,7 +82,8 @@ class MpsRoundTripTest {
       assertEquals("", text.toString(), "nothing may be written when the model is refused");
       return;
     }
-    Milp back = MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names());
+    Milp back =
+        MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names());
     assertSameModel(milp, back);
   }
 
@@ -86,7 +92,8 @@ class MpsRoundTripTest {
     for (SampleModels.Known known : SampleModels.handMade()) {
       StringWriter text = new StringWriter();
       WriteSummary summary = MpsWriter.fixed().write(known.milp(), text);
-      Milp back = MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names());
+      Milp back =
+          MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names());
       assertSameModel(known.milp(), back);
     }
   }
@@ -94,14 +101,18 @@ class MpsRoundTripTest {
   @ParameterizedTest
   @EnumSource(ModelFormat.class)
   void writingTwiceGivesIdenticalBytes(ModelFormat format) throws IOException {
-    Milp milp = format == ModelFormat.FIXED_MPS ? SampleModels.negativeBounds().milp() : awkwardModel();
+    Milp milp =
+        format == ModelFormat.FIXED_MPS ? SampleModels.negativeBounds().milp() : awkwardModel();
     StringWriter first = new StringWriter();
     StringWriter second = new StringWriter();
     ModelFiles.writeTo(milp, first, format);
     ModelFiles.writeTo(milp, second, format);
     assertEquals(first.toString(), second.toString());
     StringWriter rebuilt = new StringWriter();
-    ModelFiles.writeTo(format == ModelFormat.FIXED_MPS ? SampleModels.negativeBounds().milp() : awkwardModel(), rebuilt, format);
+    ModelFiles.writeTo(
+        format == ModelFormat.FIXED_MPS ? SampleModels.negativeBounds().milp() : awkwardModel(),
+        rebuilt,
+        format);
     assertEquals(first.toString(), rebuilt.toString(), "a model built again the same way");
   }
 

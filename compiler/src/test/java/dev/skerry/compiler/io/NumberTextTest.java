@@ -43,7 +43,9 @@ class NumberTextTest {
     for (int i = 0; i < 2_000; i++) {
       double v =
           switch (i % 3) {
-            case 0 -> BigDecimal.valueOf(rnd.nextInt(2_000_000) - 1_000_000, rnd.nextInt(30) - 12).doubleValue();
+            case 0 ->
+                BigDecimal.valueOf(rnd.nextInt(2_000_000) - 1_000_000, rnd.nextInt(30) - 12)
+                    .doubleValue();
             case 1 -> rnd.nextGaussian() * Math.pow(10, rnd.nextInt(40) - 20);
             default -> Double.longBitsToDouble(rnd.nextLong());
           };

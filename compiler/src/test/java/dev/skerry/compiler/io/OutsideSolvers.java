@@ -20,9 +20,9 @@ import java.util.concurrent.TimeUnit;
  *   <li>{@code glpsol} 5.0 from the Debian package {@code glpk-utils}.
  * </ul>
  *
- * Both exit with code 0 even when they could not read the file, so the sign of failure is a
- * missing solution file (FORMATS.md). When a solver is not installed, the calling test fails
- * with a message saying which package to install; it is never skipped.
+ * Both exit with code 0 even when they could not read the file, so the sign of failure is a missing
+ * solution file (FORMATS.md). When a solver is not installed, the calling test fails with a message
+ * saying which package to install; it is never skipped.
  */
 public final class OutsideSolvers {
   private static final long TIMEOUT_SECONDS = 120;
@@ -53,7 +53,10 @@ public final class OutsideSolvers {
     }
   }
 
-  /** Solves with {@code cbc F -solve -printingOptions all -solu SOL} (cbc picks LP or MPS by extension). */
+  /**
+   * Solves with {@code cbc F -solve -printingOptions all -solu SOL} (cbc picks LP or MPS by
+   * extension).
+   */
   public static Result cbcObjective(Path model) throws IOException, InterruptedException {
     Path cbc = require("cbc", "coinor-cbc");
     Path work = Files.createTempDirectory("skerry-cbc");
@@ -65,6 +68,8 @@ public final class OutsideSolvers {
               List.of(
                   cbc.toString(),
                   model.toAbsolutePath().toString(),
+                  "-preprocess",
+                  "off",
                   "-solve",
                   "-printingOptions",
                   "all",
@@ -88,8 +93,8 @@ public final class OutsideSolvers {
   }
 
   /**
-   * Solves with glpsol; {@code maximize} adds {@code --max}, for outside files that are meant to
-   * be maximised but carry no sense (our own files are always minimisations).
+   * Solves with glpsol; {@code maximize} adds {@code --max}, for outside files that are meant to be
+   * maximised but carry no sense (our own files are always minimisations).
    */
   public static Result glpsolObjective(Path model, ModelFormat format, boolean maximize)
       throws IOException, InterruptedException {
@@ -105,7 +110,12 @@ public final class OutsideSolvers {
           };
       List<String> command =
           new ArrayList<>(
-              List.of(glpsol.toString(), option, model.toAbsolutePath().toString(), "-w", solution.toString()));
+              List.of(
+                  glpsol.toString(),
+                  option,
+                  model.toAbsolutePath().toString(),
+                  "-w",
+                  solution.toString()));
       if (maximize) {
         command.add("--max");
       }
@@ -124,9 +134,7 @@ public final class OutsideSolvers {
     }
   }
 
-  /**
-   * Two optima agree within 1e-6 relative plus 1e-9 absolute (cbc prints 8 significant digits).
-   */
+  /** Two optima agree within 1e-6 relative plus 1e-9 absolute (cbc prints 8 significant digits). */
   public static boolean sameOptimum(double a, double b) {
     return Math.abs(a - b) <= 1e-9 + 1e-6 * Math.max(Math.abs(a), Math.abs(b));
   }
@@ -196,11 +204,17 @@ public final class OutsideSolvers {
       }
     }
     return fail(
-        program + " is not installed, but the model-file tests need it as an outside judge:"
-            + " install the Debian package " + debianPackage + " (apt-get install " + debianPackage + ")");
+        program
+            + " is not installed, but the model-file tests need it as an outside judge:"
+            + " install the Debian package "
+            + debianPackage
+            + " (apt-get install "
+            + debianPackage
+            + ")");
   }
 
-  private static String run(Path work, List<String> command) throws IOException, InterruptedException {
+  private static String run(Path work, List<String> command)
+      throws IOException, InterruptedException {
     Path log = work.resolve("log.txt");
     Process process =
         new ProcessBuilder(command)

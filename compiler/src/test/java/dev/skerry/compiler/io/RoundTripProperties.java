@@ -30,9 +30,9 @@ import net.jqwik.api.constraints.LongRange;
 import net.jqwik.api.statistics.Statistics;
 
 /**
- * Random small models survive a trip through free and fixed MPS bit for bit. There is no LP
- * reader, so LP files are checked by {@code glpsol} 5.0 (Debian glpk-utils) and {@code cbc} 2.10
- * (Debian coinor-cbc) instead, on a sample of feasible, bounded models.
+ * Random small models survive a trip through free and fixed MPS bit for bit. There is no LP reader,
+ * so LP files are checked by {@code glpsol} 5.0 (Debian glpk-utils) and {@code cbc} 2.10 (Debian
+ * coinor-cbc) instead, on a sample of feasible, bounded models.
  */
 class RoundTripProperties {
   record ColumnSpec(String name, VarType type, double lower, double upper) {}
@@ -42,7 +42,11 @@ class RoundTripProperties {
   record RowSpec(String name, List<Term> terms, double lower, double upper) {}
 
   record ModelSpec(
-      List<ColumnSpec> columns, List<RowSpec> rows, List<Term> objective, double constant, boolean minimize) {
+      List<ColumnSpec> columns,
+      List<RowSpec> rows,
+      List<Term> objective,
+      double constant,
+      boolean minimize) {
     Milp build() {
       MilpBuilder b = new MilpBuilder("property");
       List<Variable> vars = new ArrayList<>();
@@ -84,21 +88,32 @@ class RoundTripProperties {
     return Arbitraries.oneOf(
         Arbitraries.doubles().between(-1e6, 1e6),
         Arbitraries.doubles().between(-1e28, 1e28),
-        Arbitraries.of(1.0 / 3, -2.0 / 3, Math.PI, 0.1, 0.3, 1e-300, -4.9e-324, 123456789.123456789),
+        Arbitraries.of(
+            1.0 / 3, -2.0 / 3, Math.PI, 0.1, 0.3, 1e-300, -4.9e-324, 123456789.123456789),
         Arbitraries.integers().between(-20, 20).map(i -> (double) i));
   }
 
   /** Decimals of at most six significant digits: what fixed MPS is meant to carry. */
   static Arbitrary<Double> shortDecimal() {
-    return Combinators.combine(Arbitraries.integers().between(-999_999, 999_999), Arbitraries.integers().between(-3, 8))
+    return Combinators.combine(
+            Arbitraries.integers().between(-999_999, 999_999),
+            Arbitraries.integers().between(-3, 8))
         .as((unscaled, scale) -> BigDecimal.valueOf(unscaled, scale).doubleValue());
   }
 
   static Arbitrary<String> names() {
     return Arbitraries.oneOf(
         Arbitraries.strings().withCharRange('a', 'z').ofMinLength(1).ofMaxLength(8),
-        Arbitraries.strings().withCharRange('a', 'z').numeric().withChars('_', '[', ']', ',').ofMinLength(9).ofMaxLength(90),
-        Arbitraries.strings().withChars('x', ' ', '\u00e9', '$', '*', '\'', '\t').ofMinLength(1).ofMaxLength(12));
+        Arbitraries.strings()
+            .withCharRange('a', 'z')
+            .numeric()
+            .withChars('_', '[', ']', ',')
+            .ofMinLength(9)
+            .ofMaxLength(90),
+        Arbitraries.strings()
+            .withChars('x', ' ', '\u00e9', '$', '*', '\'', '\t')
+            .ofMinLength(1)
+            .ofMaxLength(12));
   }
 
   static Arbitrary<ModelSpec> models(Arbitrary<Double> numbers) {
@@ -148,7 +163,8 @@ class RoundTripProperties {
     Milp milp = spec.build();
     StringWriter text = new StringWriter();
     WriteSummary summary = MpsWriter.free().write(milp, text);
-    assertSameModel(milp, MpsReader.read(new StringReader(text.toString()), ModelFormat.MPS, summary.names()));
+    assertSameModel(
+        milp, MpsReader.read(new StringReader(text.toString()), ModelFormat.MPS, summary.names()));
   }
 
   /** Most of these models must really be written, or the property would prove little. */
@@ -164,7 +180,11 @@ class RoundTripProperties {
       // cleanly, with nothing written.
       assertTrue(e.getMessage().contains("12 characters"), e.getMessage());
       assertEquals("", text.toString());
-      Statistics.collect("refused " + e.getMessage().replaceAll("[-0-9.E]+", "#").replaceAll("(row|column) .*?:", "$1 N:"));
+      Statistics.collect(
+          "refused "
+              + e.getMessage()
+                  .replaceAll("[-0-9.E]+", "#")
+                  .replaceAll("(row|column) .*?:", "$1 N:"));
       return;
     }
     Statistics.collect("written");
@@ -172,16 +192,22 @@ class RoundTripProperties {
     for (String line : text.toString().split("\n")) {
       assertTrue(line.length() <= 61 || line.startsWith("*"), "fixed MPS line too long: " + line);
     }
-    assertSameModel(milp, MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names()));
+    assertSameModel(
+        milp,
+        MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names()));
   }
 
   @Property(tries = 200)
-  void fixedMpsEitherReadsBackExactlyOrRefusesBeforeWriting(@ForAll("anyModel") ModelSpec spec) throws IOException {
+  void fixedMpsEitherReadsBackExactlyOrRefusesBeforeWriting(@ForAll("anyModel") ModelSpec spec)
+      throws IOException {
     Milp milp = spec.build();
     StringWriter text = new StringWriter();
     try {
       WriteSummary summary = MpsWriter.fixed().write(milp, text);
-      assertSameModel(milp, MpsReader.read(new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names()));
+      assertSameModel(
+          milp,
+          MpsReader.read(
+              new StringReader(text.toString()), ModelFormat.FIXED_MPS, summary.names()));
     } catch (IllegalArgumentException e) {
       assertTrue(e.getMessage().contains("12 characters"), e.getMessage());
       assertEquals("", text.toString());
@@ -193,7 +219,8 @@ class RoundTripProperties {
    * glpsol finds in the free MPS file of the same model.
    */
   @Property(tries = 12)
-  void lpFilesSolveLikeMpsFiles(@ForAll @LongRange(min = 1000, max = 1_000_000) long seed) throws Exception {
+  void lpFilesSolveLikeMpsFiles(@ForAll @LongRange(min = 1000, max = 1_000_000) long seed)
+      throws Exception {
     Milp milp = SampleModels.random(seed, false);
     Path folder = Files.createTempDirectory("skerry-lp-property");
     try {
@@ -205,12 +232,24 @@ class RoundTripProperties {
       assertEquals(OutsideSolvers.Status.OPTIMAL, reference.status(), reference.detail());
       double expected = mpsSummary.modelObjective(reference.objective());
       for (OutsideSolvers.Result result :
-          List.of(OutsideSolvers.glpsolObjective(lp, ModelFormat.LP), OutsideSolvers.cbcObjective(lp))) {
-        assertEquals(OutsideSolvers.Status.OPTIMAL, result.status(), result.solver() + ": " + result.detail());
+          List.of(
+              OutsideSolvers.glpsolObjective(lp, ModelFormat.LP),
+              OutsideSolvers.cbcObjective(lp))) {
+        assertEquals(
+            OutsideSolvers.Status.OPTIMAL,
+            result.status(),
+            result.solver() + ": " + result.detail());
         double actual = lpSummary.modelObjective(result.objective());
         assertTrue(
             OutsideSolvers.sameOptimum(expected, actual),
-            "seed " + seed + ": MPS gives " + expected + ", " + result.solver() + " on LP " + actual);
+            "seed "
+                + seed
+                + ": MPS gives "
+                + expected
+                + ", "
+                + result.solver()
+                + " on LP "
+                + actual);
       }
     } finally {
       try (var files = Files.list(folder)) {

@@ -10,8 +10,8 @@ import java.util.List;
 import java.util.Random;
 
 /**
- * Small models for the writer tests, each with its optimum worked out by hand (in the comment)
- * or by enumeration in the test, never taken from our own output.
+ * Small models for the writer tests, each with its optimum worked out by hand (in the comment) or
+ * by enumeration in the test, never taken from our own output.
  */
 final class SampleModels {
   private static final Origin O = Origin.NONE;
@@ -60,10 +60,9 @@ final class SampleModels {
   }
 
   /**
-   * min x - y, 1 ≤ x + y ≤ 4, -2 ≤ x - 2y ≤ 3, -7.5 ≤ x - y ≤ 0.25, x, y in [0, 10]. With x = 0
-   * the second range gives y ≤ 1; for 0 ≤ x ≤ 2 the best is y = (x + 2)/2, objective x/2 - 1;
-   * for x ≥ 2 it is y = 4 - x, objective 2x - 4 ≥ 0. Optimum -1 at (0, 1), where the third
-   * range holds.
+   * min x - y, 1 ≤ x + y ≤ 4, -2 ≤ x - 2y ≤ 3, -7.5 ≤ x - y ≤ 0.25, x, y in [0, 10]. With x = 0 the
+   * second range gives y ≤ 1; for 0 ≤ x ≤ 2 the best is y = (x + 2)/2, objective x/2 - 1; for x ≥ 2
+   * it is y = 4 - x, objective 2x - 4 ≥ 0. Optimum -1 at (0, 1), where the third range holds.
    */
   static Known ranges() {
     MilpBuilder b = new MilpBuilder("ranges");
@@ -94,8 +93,8 @@ final class SampleModels {
   /**
    * min -x - 2y + z + w, x in [-5, -2], y integer in [-3, -1], z in [-4, 6], w ≤ -1 (no lower
    * bound), x + y + z ≥ -6, w ≥ -9. At x = -2, y = -1 the row needs z ≥ -3: objective 2 + 2 - 3;
-   * lowering x frees z one for one (no gain), lowering y costs 2 to gain 1. w = -9. Optimum
-   * 1 - 9 = -8.
+   * lowering x frees z one for one (no gain), lowering y costs 2 to gain 1. w = -9. Optimum 1 - 9 =
+   * -8.
    */
   static Known negativeBounds() {
     MilpBuilder b = new MilpBuilder("negative");
@@ -110,8 +109,8 @@ final class SampleModels {
   }
 
   /**
-   * min t + k, t - u ≥ 3, t + u ≥ -1, k ≥ -2.5, t and u free, k a free integer. t ≥ max(3 + u,
-   * -1 - u) is least at u = -2, t = 1; k = -2. Optimum -1.
+   * min t + k, t - u ≥ 3, t + u ≥ -1, k ≥ -2.5, t and u free, k a free integer. t ≥ max(3 + u, -1 -
+   * u) is least at u = -2, t = 1; k = -2. Optimum -1.
    */
   static Known freeVariables() {
     MilpBuilder b = new MilpBuilder("free");
@@ -136,8 +135,8 @@ final class SampleModels {
   }
 
   /**
-   * max 3x + 2y - 1.25, x + y ≤ 4, x + 3y ≤ 6, x in [0, 3], y ≥ 0. Vertices (3, 1): 11, (3, 0):
-   * 9, (0, 2): 4, (0, 0): 0. Optimum 11 - 1.25 = 9.75.
+   * max 3x + 2y - 1.25, x + y ≤ 4, x + 3y ≤ 6, x in [0, 3], y ≥ 0. Vertices (3, 1): 11, (3, 0): 9,
+   * (0, 2): 4, (0, 0): 0. Optimum 11 - 1.25 = 9.75.
    */
   static Known maximisation() {
     MilpBuilder b = new MilpBuilder("maximise");
@@ -150,9 +149,9 @@ final class SampleModels {
   }
 
   /**
-   * min -x - y - z, x integer in [2, 7], y integer in [-3, 5], z integer ≥ 0 without upper
-   * bound, 2x + 3y ≤ 17.5, z ≤ 4.7. x + y is largest at x = 7, y = 1 (8; x = 6 allows y = 1
-   * too, x = 2 allows y = 4); z = 4. Optimum -12.
+   * min -x - y - z, x integer in [2, 7], y integer in [-3, 5], z integer ≥ 0 without upper bound,
+   * 2x + 3y ≤ 17.5, z ≤ 4.7. x + y is largest at x = 7, y = 1 (8; x = 6 allows y = 1 too, x = 2
+   * allows y = 4); z = 4. Optimum -12.
    */
   static Known generalIntegers() {
     MilpBuilder b = new MilpBuilder("integers");
@@ -243,8 +242,8 @@ final class SampleModels {
   }
 
   /**
-   * The optimum of a model whose columns are all integer with finite bounds, by trying every
-   * point; uses only the model's own {@code maxViolation} and objective value.
+   * The optimum of a model whose columns are all integer with finite bounds, by trying every point;
+   * uses only the model's own {@code maxViolation} and objective value.
    */
   static double enumerate(Milp milp) {
     int n = milp.columnCount();
@@ -253,7 +252,8 @@ final class SampleModels {
     for (int j = 0; j < n; j++) {
       Variable v = milp.variables().get(j);
       if (!v.isInteger() || !Double.isFinite(v.lower()) || !Double.isFinite(v.upper())) {
-        throw new IllegalArgumentException("enumeration needs bounded integer columns: " + v.name());
+        throw new IllegalArgumentException(
+            "enumeration needs bounded integer columns: " + v.name());
       }
       low[j] = (long) Math.ceil(v.lower());
       high[j] = (long) Math.floor(v.upper());
