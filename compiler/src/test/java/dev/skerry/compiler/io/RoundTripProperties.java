@@ -31,8 +31,9 @@ import net.jqwik.api.statistics.Statistics;
 
 /**
  * Random small models survive a trip through free and fixed MPS bit for bit. There is no LP reader,
- * so LP files are checked by {@code glpsol} 5.0 (Debian glpk-utils) and {@code cbc} 2.10 (Debian
- * coinor-cbc) instead, on a sample of feasible, bounded models.
+ * so LP files are checked by {@code glpsol} 5.0 (Debian glpk-utils) instead, on a sample of
+ * feasible, bounded models. (cbc judges LP files in {@link OutsideJudgeTest}, on fixed models, so
+ * that a cbc bug met on a new random model cannot make this property flaky.)
  */
 class RoundTripProperties {
   record ColumnSpec(String name, VarType type, double lower, double upper) {}
@@ -215,8 +216,8 @@ class RoundTripProperties {
   }
 
   /**
-   * Sampled: the LP file of a feasible, bounded random model gives glpsol and cbc the optimum
-   * glpsol finds in the free MPS file of the same model.
+   * Sampled: the LP file of a feasible, bounded random model gives glpsol the optimum it finds in
+   * the free MPS file of the same model.
    */
   @Property(tries = 12)
   void lpFilesSolveLikeMpsFiles(@ForAll @LongRange(min = 1000, max = 1_000_000) long seed)
@@ -232,9 +233,7 @@ class RoundTripProperties {
       assertEquals(OutsideSolvers.Status.OPTIMAL, reference.status(), reference.detail());
       double expected = mpsSummary.modelObjective(reference.objective());
       for (OutsideSolvers.Result result :
-          List.of(
-              OutsideSolvers.glpsolObjective(lp, ModelFormat.LP),
-              OutsideSolvers.cbcObjective(lp))) {
+          List.of(OutsideSolvers.glpsolObjective(lp, ModelFormat.LP))) {
         assertEquals(
             OutsideSolvers.Status.OPTIMAL,
             result.status(),
