@@ -21,6 +21,8 @@ import java.util.Optional;
  *   <li>The objective constant is the cost of a column fixed at 1 (both readers disagree on the
  *       sign of an objective RHS); a header comment names that column so that {@link MpsReader}
  *       folds it back into the constant.
+ *   <li>A binary with bounds [0, 1] is written as BV; one whose bounds were narrowed (say fixed
+ *       at 0) is written as an integer column with those bounds and reads back as INTEGER.
  *   <li>Each run of integer columns sits between {@code INTORG}/{@code INTEND} markers; every
  *       column gets an explicit lower bound (LO, MI, FR, FX or BV), and every integer column an
  *       explicit upper one too. Entries of a column are contiguous.
