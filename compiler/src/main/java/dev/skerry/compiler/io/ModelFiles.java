@@ -1,0 +1,91 @@
+package dev.skerry.compiler.io;
+
+import dev.skerry.compiler.milp.Milp;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.Optional;
+
+/**
+ * Writes a model file so that no reader ever sees half of it: the text goes to a temporary file in
+ * the same folder, which then replaces the target in one atomic move. When names had to be
+ * replaced, the {@link NameMap} goes next to the model as {@code <file>.names}; a stale name map
+ * from an earlier write that needed none is removed, so the two never disagree.
+ */
+public final class ModelFiles {
+  /** Appended to the model file's name to name its name map. */
+  public static final String NAME_MAP_SUFFIX = ".names";
+
+  private ModelFiles() {}
+
+  /**
+   * What was written.
+   *
+   * @param model the model file
+   * @param nameMap the name-map file, when names had to be replaced
+   * @param summary what the writer reports about the file
+   */
+  public record Written(Path model, Optional<Path> nameMap, WriteSummary summary) {}
+
+  /** Writes {@code milp} to {@code target} in {@code format}. */
+  public static Written write(Milp milp, Path target, ModelFormat format) throws IOException {
+    Path absolute = target.toAbsolutePath();
+    Path folder = absolute.getParent();
+    Path mapFile = absolute.resolveSibling(absolute.getFileName() + NAME_MAP_SUFFIX);
+    Path temporary = Files.createTempFile(folder, "." + absolute.getFileName(), ".part");
+    Path mapTemporary = null;
+    try {
+      WriteSummary summary;
+      try (Writer out = Files.newBufferedWriter(temporary, StandardCharsets.US_ASCII)) {
+        summary = writeTo(milp, out, format);
+      }
+      if (!summary.names().isEmpty()) {
+        mapTemporary = Files.createTempFile(folder, "." + mapFile.getFileName(), ".part");
+        summary.names().writeTo(mapTemporary);
+        moveInto(mapTemporary, mapFile);
+        mapTemporary = null;
+      } else {
+        Files.deleteIfExists(mapFile);
+      }
+      moveInto(temporary, absolute);
+      temporary = null;
+      return new Written(
+          absolute, summary.names().isEmpty() ? Optional.empty() : Optional.of(mapFile), summary);
+    } finally {
+      if (temporary != null) {
+        Files.deleteIfExists(temporary);
+      }
+      if (mapTemporary != null) {
+        Files.deleteIfExists(mapTemporary);
+      }
+    }
+  }
+
+  /** Writes {@code milp} to {@code target}, the format following from the file name. */
+  public static Written write(Milp milp, Path target) throws IOException {
+    return write(milp, target, ModelFormat.fromPath(target));
+  }
+
+  /** Streams {@code milp} in {@code format} to any text target. */
+  public static WriteSummary writeTo(Milp milp, Appendable out, ModelFormat format)
+      throws IOException {
+    return switch (format) {
+      case MPS -> MpsWriter.free().write(milp, out);
+      case FIXED_MPS -> MpsWriter.fixed().write(milp, out);
+      case LP -> new LpWriter().write(milp, out);
+    };
+  }
+
+  private static void moveInto(Path from, Path to) throws IOException {
+    try {
+      Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+    } catch (AtomicMoveNotSupportedException e) {
+      throw new IOException(
+          "cannot replace " + to + " atomically on this file system; nothing was changed", e);
+    }
+  }
+}
