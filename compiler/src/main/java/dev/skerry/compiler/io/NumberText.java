@@ -85,6 +85,25 @@ final class NumberText {
   }
 
   /**
+   * The 12-character text nearest to {@code v}: {@link #fixed} when it reads back exactly, else
+   * {@code v} rounded to the most significant digits that fit.
+   */
+  static String nearestFixed(double v) {
+    String exact = fixed(v);
+    if (exact != null) {
+      return exact;
+    }
+    BigDecimal value = new BigDecimal(v);
+    for (int digits = 11; digits >= 1; digits--) {
+      String text = spell(value.round(new MathContext(digits, RoundingMode.HALF_EVEN)), FIXED_WIDTH);
+      if (text != null && text.length() <= FIXED_WIDTH) {
+        return text;
+      }
+    }
+    throw new IllegalArgumentException(v + " cannot be written in 12 characters");
+  }
+
+  /**
    * A decimal spelt in the first of these forms that fits in 12 characters: plain ({@code 1500},
    * {@code 0.25}), plain without the leading zero ({@code .25}), with an exponent ({@code 2.5E-7},
    * {@code 25E-8}); when none fits, the shortest of them if it fits in {@code maxLength}, else
