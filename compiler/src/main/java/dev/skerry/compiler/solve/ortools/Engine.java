@@ -1,0 +1,53 @@
+package dev.skerry.compiler.solve.ortools;
+
+/**
+ * The engines reached through OR-Tools' {@code MPSolver}, with what was measured about each on
+ * our formulation (SOLVERS.md and this package's tests).
+ */
+public enum Engine {
+  /** SCIP: the default; honours time limits, can be interrupted, uses a hint well. */
+  SCIP("scip", "SCIP", true, true),
+  /** CBC: exact; cannot be interrupted through MPSolver (measured: interruptSolve returns false). */
+  CBC("cbc", "CBC", true, true),
+  /**
+   * HiGHS: exact; a hint crashed the JVM (native SIGSEGV), so none is passed; cannot be
+   * interrupted; reports an unbounded model as INFEASIBLE (measured), which the backend checks.
+   */
+  HIGHS("highs", "HIGHS", false, true),
+  /**
+   * CP-SAT: solves a copy of the model scaled to integers, so its optimum is approximate; without
+   * scaling it called a feasible trajectory model INFEASIBLE (measured).
+   */
+  CP_SAT("cpsat", "CP_SAT", true, false);
+
+  private final String id;
+  private final String solverName;
+  private final boolean takesHint;
+  private final boolean exact;
+
+  Engine(String id, String solverName, boolean takesHint, boolean exact) {
+    this.id = id;
+    this.solverName = solverName;
+    this.takesHint = takesHint;
+    this.exact = exact;
+  }
+
+  /** The backend id a user types. */
+  public String id() {
+    return id;
+  }
+
+  /** The name {@code MPSolver.createSolver} knows it by. */
+  String solverName() {
+    return solverName;
+  }
+
+  boolean takesHint() {
+    return takesHint;
+  }
+
+  /** False when the engine solves a transformed model and its optimum is only near ours. */
+  public boolean exact() {
+    return exact;
+  }
+}
