@@ -25,11 +25,6 @@ final class TrajectoryMilps {
 
   private TrajectoryMilps() {}
 
-  /** Two zones across the diagonal from (1, 1) to (19, 19): both force a detour. */
-  static Milp twoZones(int steps) {
-    return build("two_zones", steps, List.of(new Box(6, 5, 10, 9), new Box(11, 11, 15, 15)));
-  }
-
   /** {@code count} zones of side 2 to 4 placed by a seeded random generator in [3, 17]². */
   static Milp randomZones(int steps, int count, long seed) {
     Random random = new Random(seed);
@@ -45,14 +40,28 @@ final class TrajectoryMilps {
   }
 
   static Milp build(String name, int steps, List<Box> zones) {
+    return build(name, steps, new double[] {1, 1}, new double[] {19, 19}, zones);
+  }
+
+  static final List<Box> SHORT_HOP_ZONES = List.of(new Box(5, 4, 7, 7), new Box(8.5, 8.5, 10.5, 10.5));
+
+  /** A hop from (2, 2) to (12, 12) in 10 steps past two zones on the diagonal: 72 binaries. */
+  static Milp shortHop() {
+    return build("short_hop", 10, new double[] {2, 2}, new double[] {12, 12}, SHORT_HOP_ZONES);
+  }
+
+  /** The same hop with no zones: an LP. */
+  static Milp shortHopFree() {
+    return build("short_hop_free", 10, new double[] {2, 2}, new double[] {12, 12}, List.of());
+  }
+
+  static Milp build(String name, int steps, double[] start, double[] target, List<Box> zones) {
     MilpBuilder b = new MilpBuilder(name);
     Variable[][] p = new Variable[steps + 1][2];
     Variable[][] v = new Variable[steps + 1][2];
     Variable[][] u = new Variable[steps][2];
     Variable[][] w = new Variable[steps][2];
     String[] axis = {"x", "y"};
-    double[] start = {1, 1};
-    double[] target = {19, 19};
     for (int k = 0; k <= steps; k++) {
       for (int a = 0; a < 2; a++) {
         double lo = k == 0 ? start[a] : k == steps ? target[a] : 0;

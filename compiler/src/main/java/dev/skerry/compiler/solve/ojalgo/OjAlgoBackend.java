@@ -146,7 +146,8 @@ public final class OjAlgoBackend implements SolverBackend {
       while (true) {
         try {
           Optimisation.Result r = future.get(POLL.toMillis(), TimeUnit.MILLISECONDS);
-          boolean asked = stopAskedAt[0] >= 0 || reached(options, ticker.elapsed());
+          boolean asked =
+              stopAskedAt[0] >= 0 || cancel.isCancelled() || reached(options, ticker.elapsed());
           return new Outcome(r, null, asked ? StopReason.ofEarlyStop(options) : StopReason.FINISHED, false);
         } catch (ExecutionException e) {
           return new Outcome(null, e.getCause(), StopReason.FINISHED, false);

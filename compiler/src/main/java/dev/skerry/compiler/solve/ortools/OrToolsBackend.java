@@ -103,6 +103,7 @@ public final class OrToolsBackend implements SolverBackend {
           attempt(milp, options, options.timeLimit().orElse(null), hint, false, ticker, result);
       describe(attempt, options, result);
       if (engine == Engine.HIGHS
+          && result.status() == SolveStatus.INFEASIBLE
           && attempt.raw() != null
           && attempt.raw().status() == MPSolver.ResultStatus.INFEASIBLE
           && ObjectiveBound.mayBeUnbounded(milp)) {
@@ -129,7 +130,24 @@ public final class OrToolsBackend implements SolverBackend {
   }
 
   /** One native solve as seen from the caller: its answer, or how it was left. */
-  private record Attempt(OrToolsRun.Raw raw, StopReason leftBehind, Throwable failure, boolean interrupted) {}
+  private record Attempt(
+      OrToolsRun.Raw raw, StopReason leftBehind, Throwable failure, boolean interrupted, boolean started) {
+    static Attempt finished(OrToolsRun.Raw raw, boolean interrupted) {
+      return new Attempt(raw, null, null, interrupted, true);
+    }
+
+    static Attempt failed(Throwable failure) {
+      return new Attempt(null, null, failure, false, true);
+    }
+
+    static Attempt leftBehind(StopReason why) {
+      return new Attempt(null, why, null, false, true);
+    }
+
+    static Attempt cancelledBeforeStart() {
+      return new Attempt(null, StopReason.CANCELLED, null, false, false);
+    }
+  }
 
   private Attempt attempt(
       Milp milp,
@@ -159,37 +177,40 @@ public final class OrToolsBackend implements SolverBackend {
             "skerry-" + id() + "-solve");
     worker.setDaemon(true);
     CancelToken cancel = options.cancel();
+    if (cancel.isCancelled()) {
+      run.close();
+      return Attempt.cancelledBeforeStart();
+    }
     Duration started = ticker.elapsed();
     boolean interrupted = false;
-    long refusedAt = -1;
+    long stopAskedAt = -1;
     try (CancelToken.Registration ignored = cancel.onCancel(run::interrupt)) {
       worker.start();
       while (true) {
         try {
-          return new Attempt(future.get(POLL.toMillis(), TimeUnit.MILLISECONDS), null, null, interrupted);
+          return Attempt.finished(future.get(POLL.toMillis(), TimeUnit.MILLISECONDS), interrupted);
         } catch (ExecutionException e) {
-          return new Attempt(null, null, e.getCause(), interrupted);
+          return Attempt.failed(e.getCause());
         } catch (InterruptedException e) {
           Thread.currentThread().interrupt();
           cancel.cancel();
         } catch (TimeoutException stillRunning) {
           Duration running = ticker.elapsed().minus(started);
           boolean overran = limit != null && running.compareTo(limit.plus(GRACE)) > 0;
-          if (cancel.isCancelled() || overran) {
-            // Repeated on every poll: an interrupt that lands before the native solve has
-            // started may be forgotten when it starts.
-            if (run.interrupt()) {
-              interrupted = true;
-            } else if (refusedAt < 0) {
-              refusedAt = System.nanoTime();
-            }
-            boolean waitedEnough =
-                refusedAt >= 0
-                    && (cancel.isCancelled() || System.nanoTime() - refusedAt > GRACE.toNanos());
-            if (waitedEnough && !future.isDone()) {
-              StopReason why = cancel.isCancelled() ? StopReason.CANCELLED : StopReason.TIME_LIMIT;
-              return new Attempt(null, why, null, false);
-            }
+          if (!cancel.isCancelled() && !overran) {
+            continue;
+          }
+          // Asked on every poll: an engine may refuse an interrupt until its search has begun.
+          interrupted |= run.interrupt();
+          if (stopAskedAt < 0) {
+            stopAskedAt = System.nanoTime();
+          }
+          boolean waitedEnough = System.nanoTime() - stopAskedAt > GRACE.toNanos();
+          boolean giveUp =
+              engine.interruptible() ? waitedEnough : cancel.isCancelled() || waitedEnough;
+          if (giveUp) {
+            StopReason why = cancel.isCancelled() ? StopReason.CANCELLED : StopReason.TIME_LIMIT;
+            return Attempt.leftBehind(why);
           }
         }
       }
@@ -201,14 +222,22 @@ public final class OrToolsBackend implements SolverBackend {
       result.status(SolveStatus.ERROR).message(id() + " failed: " + attempt.failure());
       return;
     }
+    if (!attempt.started()) {
+      result
+          .status(SolveStatus.NO_SOLUTION_FOUND)
+          .stopReason(StopReason.CANCELLED)
+          .message("cancelled before " + id() + " started");
+      return;
+    }
     if (attempt.leftBehind() != null) {
+      String why =
+          engine.interruptible()
+              ? " did not stop within " + GRACE.toMillis() + " ms of being interrupted"
+              : " cannot be interrupted";
       result
           .status(SolveStatus.NO_SOLUTION_FOUND)
           .stopReason(attempt.leftBehind())
-          .message(
-              id()
-                  + " cannot be interrupted; it was left to finish in the background and its"
-                  + " answer is lost");
+          .message(id() + why + "; it was left to finish in the background and its answer is lost");
       return;
     }
     OrToolsRun.Raw raw = attempt.raw();
@@ -229,7 +258,19 @@ public final class OrToolsBackend implements SolverBackend {
     switch (raw.status()) {
       case OPTIMAL -> result.status(SolveStatus.OPTIMAL);
       case FEASIBLE -> result.status(SolveStatus.FEASIBLE).stopReason(StopReason.ofEarlyStop(options));
-      case INFEASIBLE -> result.status(SolveStatus.INFEASIBLE);
+      case INFEASIBLE -> {
+        if (atTimeLimit(raw, options)) {
+          result
+              .status(SolveStatus.NO_SOLUTION_FOUND)
+              .stopReason(StopReason.ofEarlyStop(options))
+              .warning(
+                  id()
+                      + " said infeasible as it reached its time limit; not trusted, since CBC"
+                      + " has said so of a feasible model (measured)");
+        } else {
+          result.status(SolveStatus.INFEASIBLE);
+        }
+      }
       case UNBOUNDED -> result.status(SolveStatus.UNBOUNDED);
       case NOT_SOLVED, ABNORMAL -> {
         if (stopped) {
@@ -244,6 +285,15 @@ public final class OrToolsBackend implements SolverBackend {
     if (raw.values() != null) {
       result.values(raw.values()).bestBound(raw.bound());
     }
+  }
+
+  /** Whether the native solve ran up to its time limit (within 10%), or was interrupted. */
+  private static boolean atTimeLimit(OrToolsRun.Raw raw, SolveOptions options) {
+    return options.cancel().isCancelled()
+        || options
+            .timeLimit()
+            .map(limit -> raw.solveTime().toNanos() >= 0.9 * limit.toNanos())
+            .orElse(false);
   }
 
   /**

@@ -39,7 +39,13 @@ final class OrToolsRun {
    * What the solve left behind. {@code status} is null when MPSolver answered with a code its Java
    * enum lacks ({@code unknownCode}, e.g. 99 from HiGHS at a time limit without incumbent).
    */
-  record Raw(MPSolver.ResultStatus status, int unknownCode, double bound, long nodes, double[] values) {}
+  record Raw(
+      MPSolver.ResultStatus status,
+      int unknownCode,
+      double bound,
+      long nodes,
+      double[] values,
+      Duration solveTime) {}
 
   private OrToolsRun(Engine engine, MPSolver solver, MPVariable[] vars) {
     this.engine = engine;
@@ -114,6 +120,7 @@ final class OrToolsRun {
     try {
       MPSolver.ResultStatus status;
       int unknown = -1;
+      long start = System.nanoTime();
       try {
         status = solver.solve(params);
       } catch (IllegalArgumentException e) {
@@ -137,7 +144,7 @@ final class OrToolsRun {
           bound = solver.objective().bestBound();
         }
       }
-      return new Raw(status, unknown, bound, nodes(), values);
+      return new Raw(status, unknown, bound, nodes(), values, Duration.ofNanos(System.nanoTime() - start));
     } finally {
       free();
     }
