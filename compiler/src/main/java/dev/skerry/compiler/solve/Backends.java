@@ -52,8 +52,8 @@ public final class Backends {
   }
 
   /**
-   * A backend chosen for a model, and a one-line notice for the user when the choice deserves
-   * one (a fallback, or an approximate engine).
+   * A backend chosen for a model, and a one-line notice for the user when the choice deserves one
+   * (a fallback, or an approximate engine).
    */
   public record Choice(SolverBackend backend, Optional<String> notice) {}
 

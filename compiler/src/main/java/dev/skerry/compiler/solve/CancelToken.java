@@ -4,8 +4,8 @@ import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
 
 /**
- * Asks a running solve to stop. Any thread may cancel; a backend registers what it must do to
- * stop (interrupt a native solver, prune its search) with {@link #onCancel}. Cancelling twice is
+ * Asks a running solve to stop. Any thread may cancel; a backend registers what it must do to stop
+ * (interrupt a native solver, prune its search) with {@link #onCancel}. Cancelling twice is
  * harmless. A solve that is cancelled returns its best plan so far, if any.
  */
 public final class CancelToken {
@@ -30,8 +30,8 @@ public final class CancelToken {
 
   /**
    * Runs the action when the token is cancelled, at once if it already is. Close the returned
-   * registration when the solve ends so that a token reused for several solves does not keep
-   * stale actions.
+   * registration when the solve ends so that a token reused for several solves does not keep stale
+   * actions.
    */
   public Registration onCancel(Runnable action) {
     boolean runNow;

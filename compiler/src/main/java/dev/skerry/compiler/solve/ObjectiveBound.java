@@ -9,9 +9,9 @@ public final class ObjectiveBound {
   private ObjectiveBound() {}
 
   /**
-   * Whether the objective might be unbounded at all: false when every column with a cost is
-   * bounded in the direction that improves the objective (then the objective is bounded by the
-   * column bounds alone, whatever the rows say).
+   * Whether the objective might be unbounded at all: false when every column with a cost is bounded
+   * in the direction that improves the objective (then the objective is bounded by the column
+   * bounds alone, whatever the rows say).
    */
   public static boolean mayBeUnbounded(Milp milp) {
     Objective objective = milp.objective();

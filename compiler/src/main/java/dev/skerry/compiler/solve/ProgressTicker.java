@@ -7,10 +7,10 @@ import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
 
 /**
- * A watchdog thread for one solve: sends the monitor the elapsed time (and the incumbent and
- * bound once a backend reports them) at a fixed period, and runs a backend's timed actions, such
- * as interrupting a solver that overran its deadline. A helper for backends; close it when the
- * solve ends.
+ * A watchdog thread for one solve: sends the monitor the elapsed time (and the incumbent and bound
+ * once a backend reports them) at a fixed period, and runs a backend's timed actions, such as
+ * interrupting a solver that overran its deadline. A helper for backends; close it when the solve
+ * ends.
  */
 public final class ProgressTicker implements AutoCloseable {
   public static final Duration DEFAULT_PERIOD = Duration.ofMillis(250);

@@ -7,11 +7,11 @@ import java.util.Locale;
 
 /**
  * Checks the values a backend returned against the model itself, never trusting the backend's own
- * word. Each bound and row is measured relative to its own magnitude (the largest of 1, its
- * finite bound and its largest term), integrality absolutely. A violation above {@link
- * #TOLERANCE} adds a warning; one above {@link #ERROR_TOLERANCE} turns the result into {@link
- * SolveStatus#ERROR}: the point is then not a plan for this model. Tolerances as solvers use them
- * by default (about 1e-6): common practice.
+ * word. Each bound and row is measured relative to its own magnitude (the largest of 1, its finite
+ * bound and its largest term), integrality absolutely. A violation above {@link #TOLERANCE} adds a
+ * warning; one above {@link #ERROR_TOLERANCE} turns the result into {@link SolveStatus#ERROR}: the
+ * point is then not a plan for this model. Tolerances as solvers use them by default (about 1e-6):
+ * common practice.
  */
 public final class SolutionCheck {
   public static final double TOLERANCE = 1e-6;
@@ -26,8 +26,8 @@ public final class SolutionCheck {
 
   /**
    * Returns the result with its objective recomputed from the values, its max violation filled in
-   * and, if the values violate the model, a warning or an ERROR status. A result without values,
-   * or with the wrong number of them, is handled too.
+   * and, if the values violate the model, a warning or an ERROR status. A result without values, or
+   * with the wrong number of them, is handled too.
    */
   public static SolveResult apply(Milp model, SolveResult result) {
     if (!result.hasValues()) {
@@ -90,7 +90,9 @@ public final class SolutionCheck {
         worst = worse(worst, over, Math.max(1, Math.abs(bound)), "bound of column " + v.name());
       }
       if (v.isInteger()) {
-        worst = worse(worst, Math.abs(value - Math.rint(value)), 1, "integrality of column " + v.name());
+        worst =
+            worse(
+                worst, Math.abs(value - Math.rint(value)), 1, "integrality of column " + v.name());
       }
     }
     for (Row r : model.rows()) {
@@ -126,6 +128,10 @@ public final class SolutionCheck {
 
   private static String describe(Violation v) {
     return String.format(
-        Locale.ROOT, "%s off by %.3g (%.3g relative to its size)", v.where(), v.absolute(), v.scaled());
+        Locale.ROOT,
+        "%s off by %.3g (%.3g relative to its size)",
+        v.where(),
+        v.absolute(),
+        v.scaled());
   }
 }

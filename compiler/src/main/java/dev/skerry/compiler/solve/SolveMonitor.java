@@ -6,7 +6,7 @@ package dev.skerry.compiler.solve;
  */
 @FunctionalInterface
 public interface SolveMonitor {
-  SolveMonitor NONE = progress -> { };
+  SolveMonitor NONE = progress -> {};
 
   void onProgress(SolveProgress progress);
 }

@@ -12,17 +12,17 @@ import java.util.Locale;
  * @param backendId the backend that produced it
  * @param status the outcome
  * @param stopReason why the solver stopped
- * @param objective the objective at {@code values}, in the model's own sense with its constant;
- *     NaN without values
+ * @param objective the objective at {@code values}, in the model's own sense with its constant; NaN
+ *     without values
  * @param bestBound the best proven bound on the objective, constant included; NaN when unknown
  * @param gap {@code |objective − bestBound| / |objective|}; NaN when either is unknown
  * @param values one value per column, by column index; null when the solve has no values
  * @param wallTime wall-clock time of the whole call, model translation included
  * @param nodes branch-and-bound nodes, or -1 when the backend does not say
- * @param maxViolation the largest violation of a bound, row or integrality at {@code values}
- *     (see {@link dev.skerry.compiler.milp.Milp#maxViolation}); NaN without values
- * @param approximate true when the backend solved a transformed model (e.g. scaled to integers),
- *     so the values are not exact for this one
+ * @param maxViolation the largest violation of a bound, row or integrality at {@code values} (see
+ *     {@link dev.skerry.compiler.milp.Milp#maxViolation}); NaN without values
+ * @param approximate true when the backend solved a transformed model (e.g. scaled to integers), so
+ *     the values are not exact for this one
  * @param message one line for a person: what happened and, when it failed, why
  * @param warnings things a user should know about this result, possibly empty
  */
@@ -43,7 +43,8 @@ public record SolveResult(
 
   public SolveResult {
     if (backendId == null || status == null || stopReason == null || wallTime == null) {
-      throw new IllegalArgumentException("a solve result needs a backend id, status, stop reason and time");
+      throw new IllegalArgumentException(
+          "a solve result needs a backend id, status, stop reason and time");
     }
     if (status.hasSolution() && values == null) {
       throw new IllegalArgumentException("a " + status + " result must carry values");
@@ -75,7 +76,9 @@ public record SolveResult(
     StringBuilder s = new StringBuilder();
     s.append(backendId).append(": ").append(status);
     if (stopReason != StopReason.FINISHED) {
-      s.append(" (").append(stopReason.name().toLowerCase(Locale.ROOT).replace('_', ' ')).append(')');
+      s.append(" (")
+          .append(stopReason.name().toLowerCase(Locale.ROOT).replace('_', ' '))
+          .append(')');
     }
     if (!Double.isNaN(objective)) {
       s.append(String.format(Locale.ROOT, " objective %.6g", objective));

@@ -15,9 +15,9 @@ public interface SolverBackend {
   Capability capableOf(Milp model);
 
   /**
-   * Solves the model. Progress goes to the monitor from the backend's own threads; the monitor
-   * must return quickly. The values of a result are checked against the model before it is
-   * returned (see {@link SolutionCheck}).
+   * Solves the model. Progress goes to the monitor from the backend's own threads; the monitor must
+   * return quickly. The values of a result are checked against the model before it is returned (see
+   * {@link SolutionCheck}).
    */
   SolveResult solve(Milp model, SolveOptions options, SolveMonitor monitor);
 

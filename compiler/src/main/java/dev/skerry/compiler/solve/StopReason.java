@@ -12,8 +12,8 @@ public enum StopReason {
   SOLVER_LIMIT;
 
   /**
-   * Why a solve that did not finish stopped: cancelled if its token says so, else its time limit
-   * if it had one (the only limit a caller sets), else a limit of the solver's own.
+   * Why a solve that did not finish stopped: cancelled if its token says so, else its time limit if
+   * it had one (the only limit a caller sets), else a limit of the solver's own.
    */
   public static StopReason ofEarlyStop(SolveOptions options) {
     if (options.cancel().isCancelled()) {

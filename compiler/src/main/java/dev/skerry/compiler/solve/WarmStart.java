@@ -9,10 +9,11 @@ public final class WarmStart {
   private WarmStart() {}
 
   /**
-   * The warm start of the options ready to hand to a solver, or empty when there is none or it
-   * does not fit the model; in that case {@code warnings} receives why it was dropped.
+   * The warm start of the options ready to hand to a solver, or empty when there is none or it does
+   * not fit the model; in that case {@code warnings} receives why it was dropped.
    */
-  public static Optional<double[]> prepare(Milp model, SolveOptions options, SolveResult.Builder warnings) {
+  public static Optional<double[]> prepare(
+      Milp model, SolveOptions options, SolveResult.Builder warnings) {
     Optional<double[]> given = options.warmStart();
     if (given.isEmpty()) {
       return given;
@@ -20,7 +21,11 @@ public final class WarmStart {
     double[] x = given.get();
     if (x.length != model.columnCount()) {
       warnings.warning(
-          "warm start ignored: it has " + x.length + " values for " + model.columnCount() + " columns");
+          "warm start ignored: it has "
+              + x.length
+              + " values for "
+              + model.columnCount()
+              + " columns");
       return Optional.empty();
     }
     for (Variable v : model.variables()) {

@@ -24,13 +24,17 @@ class BackendsTest {
 
     @Override
     public SolveResult solve(Milp model, SolveOptions options, SolveMonitor monitor) {
-      return SolveResult.builder(id, SolveStatus.ERROR).message(reason).wallTime(Duration.ZERO).build();
+      return SolveResult.builder(id, SolveStatus.ERROR)
+          .message(reason)
+          .wallTime(Duration.ZERO)
+          .build();
     }
   }
 
   @Test
   void standardRegistryKnowsEveryId() {
-    assertEquals(List.of("default", "ojalgo", "scip", "cbc", "highs", "cpsat"), TestBackends.ALL.ids());
+    assertEquals(
+        List.of("default", "ojalgo", "scip", "cbc", "highs", "cpsat"), TestBackends.ALL.ids());
     for (String id : TestBackends.ALL.ids()) {
       assertTrue(TestBackends.ALL.choose(id, KNAPSACK).backend().capableOf(KNAPSACK).capable(), id);
     }
@@ -48,9 +52,11 @@ class BackendsTest {
   @Test
   void unknownIdNamesTheValidOnes() {
     IllegalArgumentException e =
-        assertThrows(IllegalArgumentException.class, () -> TestBackends.ALL.choose("gurobi", KNAPSACK));
+        assertThrows(
+            IllegalArgumentException.class, () -> TestBackends.ALL.choose("gurobi", KNAPSACK));
     assertEquals(
-        "unknown solver 'gurobi'; choose one of: default, ojalgo, scip, cbc, highs, cpsat", e.getMessage());
+        "unknown solver 'gurobi'; choose one of: default, ojalgo, scip, cbc, highs, cpsat",
+        e.getMessage());
   }
 
   @Test
@@ -78,7 +84,10 @@ class BackendsTest {
   void defaultTakesTheNextOrToolsEngineWhenScipIsMissing() {
     Backends registry =
         new Backends(
-            List.of(new OjAlgoBackend(), new Unavailable("scip", "no SCIP in this build"), new OrToolsBackend(Engine.CBC)));
+            List.of(
+                new OjAlgoBackend(),
+                new Unavailable("scip", "no SCIP in this build"),
+                new OrToolsBackend(Engine.CBC)));
     Backends.Choice c = registry.choose("default", KNAPSACK);
     assertEquals("cbc", c.backend().id());
     assertEquals("falling back to cbc (scip: no SCIP in this build)", c.notice().orElseThrow());
@@ -86,21 +95,30 @@ class BackendsTest {
 
   @Test
   void noCapableBackendIsAnErrorWithEveryReason() {
-    Backends registry = new Backends(List.of(new Unavailable("scip", "a"), new Unavailable("ojalgo", "b")));
-    IllegalStateException e = assertThrows(IllegalStateException.class, () -> registry.choose("default", KNAPSACK));
+    Backends registry =
+        new Backends(List.of(new Unavailable("scip", "a"), new Unavailable("ojalgo", "b")));
+    IllegalStateException e =
+        assertThrows(IllegalStateException.class, () -> registry.choose("default", KNAPSACK));
     assertEquals("no solver can run this model here: scip: a; ojalgo: b", e.getMessage());
   }
 
   @Test
   void explicitChoicesCarryTheirNotices() {
-    Backends registry = new Backends(List.of(new Unavailable("scip", "natives missing"), TestBackends.cpSat()));
-    assertEquals("solver scip cannot run here: natives missing", registry.choose("scip", KNAPSACK).notice().orElseThrow());
+    Backends registry =
+        new Backends(List.of(new Unavailable("scip", "natives missing"), TestBackends.cpSat()));
+    assertEquals(
+        "solver scip cannot run here: natives missing",
+        registry.choose("scip", KNAPSACK).notice().orElseThrow());
     assertTrue(registry.choose("cpsat", KNAPSACK).notice().orElseThrow().contains("approximate"));
   }
 
   @Test
   void idsMustBeDistinct() {
-    assertThrows(IllegalArgumentException.class, () -> new Backends(List.of(new OjAlgoBackend(), new OjAlgoBackend())));
-    assertThrows(IllegalArgumentException.class, () -> new Backends(List.of(new Unavailable("default", "x"))));
+    assertThrows(
+        IllegalArgumentException.class,
+        () -> new Backends(List.of(new OjAlgoBackend(), new OjAlgoBackend())));
+    assertThrows(
+        IllegalArgumentException.class,
+        () -> new Backends(List.of(new Unavailable("default", "x"))));
   }
 }

@@ -15,10 +15,10 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Small models whose optimum is known from outside the solvers: a published example, a closed
- * form, or brute-force enumeration of every integer point. Every exact backend must reach it
- * within 1e-6 relative; CP-SAT, which solves a scaled copy, is compared with a looser tolerance
- * and its difference printed.
+ * Small models whose optimum is known from outside the solvers: a published example, a closed form,
+ * or brute-force enumeration of every integer point. Every exact backend must reach it within 1e-6
+ * relative; CP-SAT, which solves a scaled copy, is compared with a looser tolerance and its
+ * difference printed.
  */
 class KnownOptimaTest {
   static final double REL = 1e-6;
@@ -63,9 +63,9 @@ class KnownOptimaTest {
   }
 
   /**
-   * The Wyndor Glass LP of Hillier and Lieberman, Introduction to Operations Research (ch. 3):
-   * max 3x + 5y subject to x ≤ 4, 2y ≤ 12, 3x + 2y ≤ 18; optimum 36 at the vertex (2, 6), where
-   * 2y ≤ 12 and 3x + 2y ≤ 18 are tight. Here with an objective constant of 10, so 46.
+   * The Wyndor Glass LP of Hillier and Lieberman, Introduction to Operations Research (ch. 3): max
+   * 3x + 5y subject to x ≤ 4, 2y ≤ 12, 3x + 2y ≤ 18; optimum 36 at the vertex (2, 6), where 2y ≤ 12
+   * and 3x + 2y ≤ 18 are tight. Here with an objective constant of 10, so 46.
    */
   static Milp wyndor() {
     MilpBuilder b = new MilpBuilder("wyndor");
@@ -78,7 +78,9 @@ class KnownOptimaTest {
     return b.build();
   }
 
-  /** max 5a + 8b, a + b ≤ 6, 5a + 9b ≤ 45, a, b integer in [0, 6]; LP optimum 41.25 is fractional. */
+  /**
+   * max 5a + 8b, a + b ≤ 6, 5a + 9b ≤ 45, a, b integer in [0, 6]; LP optimum 41.25 is fractional.
+   */
   static Milp smallIp() {
     MilpBuilder b = new MilpBuilder("small_ip");
     Variable x = b.newInteger("a", 0, 6, Origin.NONE);
@@ -212,10 +214,15 @@ class KnownOptimaTest {
       assertTrue(r.approximate(), r::summary);
       double diff = Math.abs(r.objective() - expected[i]) / Math.max(1, Math.abs(expected[i]));
       System.out.printf(
-          Locale.ROOT, "cpsat %s: %.9g vs %.9g, relative difference %.2e%n",
-          models[i].name(), r.objective(), expected[i], diff);
+          Locale.ROOT,
+          "cpsat %s: %.9g vs %.9g, relative difference %.2e%n",
+          models[i].name(),
+          r.objective(),
+          expected[i],
+          diff);
       assertTrue(diff <= 1e-4, r::summary);
     }
-    assertEquals(SolveStatus.INFEASIBLE, cpSat.solve(integerInfeasible(), SolveOptions.defaults()).status());
+    assertEquals(
+        SolveStatus.INFEASIBLE, cpSat.solve(integerInfeasible(), SolveOptions.defaults()).status());
   }
 }

@@ -25,7 +25,10 @@ class SolutionCheckTest {
   }
 
   static SolveResult claimed(double... values) {
-    return SolveResult.builder("fake", SolveStatus.OPTIMAL).values(values).wallTime(Duration.ZERO).build();
+    return SolveResult.builder("fake", SolveStatus.OPTIMAL)
+        .values(values)
+        .wallTime(Duration.ZERO)
+        .build();
   }
 
   @Test
@@ -92,6 +95,8 @@ class SolutionCheckTest {
     SolveResult checked = SolutionCheck.apply(model(), r);
     assertEquals(55, checked.objective());
     assertEquals(5.0 / 55, checked.gap(), 1e-12, "|55 − 50| / |55|");
-    assertTrue(checked.summary().startsWith("fake: FEASIBLE (time limit) objective 55"), checked.summary());
+    assertTrue(
+        checked.summary().startsWith("fake: FEASIBLE (time limit) objective 55"),
+        checked.summary());
   }
 }

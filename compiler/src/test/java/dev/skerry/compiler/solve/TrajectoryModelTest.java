@@ -9,17 +9,16 @@ import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.MethodSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /** Models shaped like Skerry's own (see {@link TrajectoryMilps}). */
 class TrajectoryModelTest {
   /**
-   * Rest-to-rest in free space with 1-norm fuel. Derived here: with v_{k+1} = v_k + u_k and
-   * p_{k+1} = p_k + v_k + u_k/2, the distance is d = Σ_{k=1}^{N−1} v_k ≤ (N−1)·V for the peak
-   * speed V, and the speed must rise from 0 to V and fall back, so fuel ≥ 2V ≥ 2d/(N−1) per axis;
-   * one impulse of V at the start and one of −V at the end reach it when V ≤ u_max and V ≤ v_max.
-   * From (1, 1) to (19, 19): d = 18 per axis.
+   * Rest-to-rest in free space with 1-norm fuel. Derived here: with v_{k+1} = v_k + u_k and p_{k+1}
+   * = p_k + v_k + u_k/2, the distance is d = Σ_{k=1}^{N−1} v_k ≤ (N−1)·V for the peak speed V, and
+   * the speed must rise from 0 to V and fall back, so fuel ≥ 2V ≥ 2d/(N−1) per axis; one impulse of
+   * V at the start and one of −V at the end reach it when V ≤ u_max and V ≤ v_max. From (1, 1) to
+   * (19, 19): d = 18 per axis.
    */
   @ParameterizedTest(name = "{0} steps")
   @ValueSource(ints = {19, 25})
@@ -43,7 +42,8 @@ class TrajectoryModelTest {
   void exactBackendsAgreeOnZoneAvoidance() {
     Milp m = TrajectoryMilps.shortHop();
     assertEquals(72, m.binaryCount(), "4 binaries per zone per inner step: 4·2·9");
-    SolveResult free = TestBackends.exact().get(1).solve(TrajectoryMilps.shortHopFree(), SolveOptions.defaults());
+    SolveResult free =
+        TestBackends.exact().get(1).solve(TrajectoryMilps.shortHopFree(), SolveOptions.defaults());
     assertEquals(SolveStatus.OPTIMAL, free.status(), free::summary);
     List<SolveResult> results = new ArrayList<>();
     for (SolverBackend b : TestBackends.exact()) {
@@ -56,7 +56,11 @@ class TrajectoryModelTest {
     }
     double reference = results.get(0).objective();
     for (SolveResult r : results) {
-      assertEquals(reference, r.objective(), 1e-6 * Math.abs(reference), r.summary() + " vs " + results.get(0).summary());
+      assertEquals(
+          reference,
+          r.objective(),
+          1e-6 * Math.abs(reference),
+          r.summary() + " vs " + results.get(0).summary());
     }
   }
 
@@ -65,14 +69,22 @@ class TrajectoryModelTest {
   void cpSatIsNearTheExactOptimum() {
     Milp m = TrajectoryMilps.shortHop();
     SolveResult exact = TestBackends.exact().get(1).solve(m, SolveOptions.defaults());
-    SolveResult approx = TestBackends.cpSat().solve(m, SolveOptions.defaults().withTimeLimit(java.time.Duration.ofSeconds(20)));
+    SolveResult approx =
+        TestBackends.cpSat()
+            .solve(m, SolveOptions.defaults().withTimeLimit(java.time.Duration.ofSeconds(20)));
     assertTrue(approx.status().hasSolution(), approx::summary);
     assertTrue(approx.approximate(), approx::summary);
     assertOutsideZones(m, approx);
     double diff = (approx.objective() - exact.objective()) / exact.objective();
-    System.out.printf(Locale.ROOT, "cpsat short hop: %.9g vs exact %.9g, relative difference %.2e (%s)%n",
-        approx.objective(), exact.objective(), diff, approx.status());
-    assertTrue(diff >= -1e-6, "a feasible point cannot beat the proven optimum: " + approx.summary());
+    System.out.printf(
+        Locale.ROOT,
+        "cpsat short hop: %.9g vs exact %.9g, relative difference %.2e (%s)%n",
+        approx.objective(),
+        exact.objective(),
+        diff,
+        approx.status());
+    assertTrue(
+        diff >= -1e-6, "a feasible point cannot beat the proven optimum: " + approx.summary());
     assertTrue(diff <= 1e-2, approx::summary);
   }
 
@@ -84,11 +96,23 @@ class TrajectoryModelTest {
         double y = r.value(m.variable("py_" + k));
         double tol = 1e-6;
         boolean outside =
-            x <= box.x1() + tol || x >= box.x2() - tol || y <= box.y1() + tol || y >= box.y2() - tol;
+            x <= box.x1() + tol
+                || x >= box.x2() - tol
+                || y <= box.y1() + tol
+                || y >= box.y2() - tol;
         int zone = z;
         int step = k;
-        assertTrue(outside, () -> String.format(Locale.ROOT, "%s: step %d at (%.6f, %.6f) is inside zone %d",
-            r.backendId(), step, x, y, zone));
+        assertTrue(
+            outside,
+            () ->
+                String.format(
+                    Locale.ROOT,
+                    "%s: step %d at (%.6f, %.6f) is inside zone %d",
+                    r.backendId(),
+                    step,
+                    x,
+                    y,
+                    zone));
       }
     }
   }

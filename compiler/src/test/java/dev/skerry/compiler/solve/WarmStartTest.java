@@ -17,8 +17,8 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Warm starts, on the 72-binary hop for the fast engines and on the knapsack where a backend
- * would need many seconds for the hop (ojAlgo without a good start, CP-SAT).
+ * Warm starts, on the 72-binary hop for the fast engines and on the knapsack where a backend would
+ * need many seconds for the hop (ojAlgo without a good start, CP-SAT).
  */
 class WarmStartTest {
   static final Milp HOP = TrajectoryMilps.shortHop();
@@ -39,7 +39,8 @@ class WarmStartTest {
   }
 
   static boolean slowOnHop(SolverBackend b) {
-    return b instanceof OjAlgoBackend || b instanceof OrToolsBackend o && o.engine() == Engine.CP_SAT;
+    return b instanceof OjAlgoBackend
+        || b instanceof OrToolsBackend o && o.engine() == Engine.CP_SAT;
   }
 
   /** Every binary 0: all four sides of each zone enforced at once, which no point satisfies. */
@@ -94,19 +95,28 @@ class WarmStartTest {
 
   @Test
   void highsIsNeverHintedAndSaysSo() {
-    SolveResult r = new OrToolsBackend(Engine.HIGHS).solve(HOP, SolveOptions.defaults().withWarmStart(hopOptimum));
+    SolveResult r =
+        new OrToolsBackend(Engine.HIGHS)
+            .solve(HOP, SolveOptions.defaults().withWarmStart(hopOptimum));
     assertEquals(SolveStatus.OPTIMAL, r.status(), r::summary);
-    assertTrue(r.warnings().stream().anyMatch(w -> w.contains("never given a warm start")), () -> r.warnings().toString());
+    assertTrue(
+        r.warnings().stream().anyMatch(w -> w.contains("never given a warm start")),
+        () -> r.warnings().toString());
   }
 
   /**
-   * The hint is used: ojAlgo needs about 9 s to prove this optimum and finds no plan in 0.5 s
-   * alone (see LimitsAndCancelTest); with the optimum as its start it returns it at its deadline.
+   * The hint is used: ojAlgo needs about 9 s to prove this optimum and finds no plan in 0.5 s alone
+   * (see LimitsAndCancelTest); with the optimum as its start it returns it at its deadline.
    */
   @Test
   void ojAlgoReturnsTheHintWhenStoppedEarly() {
-    SolveResult r = new OjAlgoBackend().solve(
-        HOP, SolveOptions.defaults().withWarmStart(hopOptimum).withTimeLimit(Duration.ofMillis(300)));
+    SolveResult r =
+        new OjAlgoBackend()
+            .solve(
+                HOP,
+                SolveOptions.defaults()
+                    .withWarmStart(hopOptimum)
+                    .withTimeLimit(Duration.ofMillis(300)));
     assertTrue(r.status().hasSolution(), r::summary);
     assertEquals(hopObjective, r.objective(), 1e-6 * hopObjective, r::summary);
   }
@@ -119,7 +129,9 @@ class WarmStartTest {
     for (double[] hint : new double[][] {Arrays.copyOf(hopOptimum, 5), withNan}) {
       SolveResult r = scip.solve(HOP, SolveOptions.defaults().withWarmStart(hint));
       assertEquals(SolveStatus.OPTIMAL, r.status(), r::summary);
-      assertTrue(r.warnings().stream().anyMatch(w -> w.startsWith("warm start ignored")), () -> r.warnings().toString());
+      assertTrue(
+          r.warnings().stream().anyMatch(w -> w.startsWith("warm start ignored")),
+          () -> r.warnings().toString());
     }
   }
 }

@@ -9,18 +9,18 @@ import org.ojalgo.optimisation.Expression;
 import org.ojalgo.optimisation.ExpressionsBasedModel;
 
 /**
- * Writes a {@link Milp} as an ojAlgo {@link ExpressionsBasedModel}: one ojAlgo variable per
- * column in the same order (so result index i is column i), one expression per row, the objective
- * as variable weights. The objective constant stays out; the solve layer adds it back by
- * evaluating the model's own objective. Infinite bounds are left unset, which ojAlgo reads as
- * unbounded.
+ * Writes a {@link Milp} as an ojAlgo {@link ExpressionsBasedModel}: one ojAlgo variable per column
+ * in the same order (so result index i is column i), one expression per row, the objective as
+ * variable weights. The objective constant stays out; the solve layer adds it back by evaluating
+ * the model's own objective. Infinite bounds are left unset, which ojAlgo reads as unbounded.
  */
 final class OjAlgoModels {
   private OjAlgoModels() {}
 
   static ExpressionsBasedModel of(Milp milp) {
     ExpressionsBasedModel model = new ExpressionsBasedModel();
-    org.ojalgo.optimisation.Variable[] vars = new org.ojalgo.optimisation.Variable[milp.columnCount()];
+    org.ojalgo.optimisation.Variable[] vars =
+        new org.ojalgo.optimisation.Variable[milp.columnCount()];
     for (Variable v : milp.variables()) {
       org.ojalgo.optimisation.Variable x = model.addVariable(v.name());
       if (Double.isFinite(v.lower())) {

@@ -1,13 +1,15 @@
 package dev.skerry.compiler.solve.ortools;
 
 /**
- * The engines reached through OR-Tools' {@code MPSolver}, with what was measured about each on
- * our formulation (SOLVERS.md and this package's tests).
+ * The engines reached through OR-Tools' {@code MPSolver}, with what was measured about each on our
+ * formulation (SOLVERS.md and this package's tests).
  */
 public enum Engine {
   /** SCIP: the default; honours time limits, can be interrupted, uses a hint well. */
   SCIP("scip", "SCIP", true, true, true),
-  /** CBC: exact; cannot be interrupted through MPSolver (measured: interruptSolve returns false). */
+  /**
+   * CBC: exact; cannot be interrupted through MPSolver (measured: interruptSolve returns false).
+   */
   CBC("cbc", "CBC", true, true, false),
   /**
    * HiGHS: exact; a hint crashed the JVM (native SIGSEGV), so none is passed; cannot be
@@ -49,8 +51,8 @@ public enum Engine {
   }
 
   /**
-   * Whether {@code MPSolver.interruptSolve} stops this engine (measured: SCIP and CP-SAT within
-   * 0.1 s; CBC and HiGHS refuse and run on).
+   * Whether {@code MPSolver.interruptSolve} stops this engine (measured: SCIP and CP-SAT within 0.1
+   * s; CBC and HiGHS refuse and run on).
    */
   boolean interruptible() {
     return interruptible;

@@ -27,11 +27,10 @@ import java.util.concurrent.TimeoutException;
  * Solves through OR-Tools' {@code MPSolver} with one {@link Engine}.
  *
  * <p>The native solve runs on a worker thread while the calling thread keeps the deadline and
- * watches the cancel token. The time limit is handed to the engine; should the engine overrun it
- * by {@link #GRACE}, or be cancelled, it is interrupted. SCIP and CP-SAT stop when interrupted;
- * CBC and HiGHS cannot be (measured), so then the call returns at once with NO_SOLUTION_FOUND and
- * the engine runs on in the background until its own time limit, or the JVM's end, then frees
- * itself.
+ * watches the cancel token. The time limit is handed to the engine; should the engine overrun it by
+ * {@link #GRACE}, or be cancelled, it is interrupted. SCIP and CP-SAT stop when interrupted; CBC
+ * and HiGHS cannot be (measured), so then the call returns at once with NO_SOLUTION_FOUND and the
+ * engine runs on in the background until its own time limit, or the JVM's end, then frees itself.
  */
 public final class OrToolsBackend implements SolverBackend {
   /** How far past its time limit an engine may run before it is interrupted or left behind. */
@@ -131,7 +130,11 @@ public final class OrToolsBackend implements SolverBackend {
 
   /** One native solve as seen from the caller: its answer, or how it was left. */
   private record Attempt(
-      OrToolsRun.Raw raw, StopReason leftBehind, Throwable failure, boolean interrupted, boolean started) {
+      OrToolsRun.Raw raw,
+      StopReason leftBehind,
+      Throwable failure,
+      boolean interrupted,
+      boolean started) {
     static Attempt finished(OrToolsRun.Raw raw, boolean interrupted) {
       return new Attempt(raw, null, null, interrupted, true);
     }
@@ -251,13 +254,17 @@ public final class OrToolsBackend implements SolverBackend {
         result
             .status(SolveStatus.ERROR)
             .message(
-                id() + " ended with a status MPSolver does not know (code " + raw.unknownCode() + ")");
+                id()
+                    + " ended with a status MPSolver does not know (code "
+                    + raw.unknownCode()
+                    + ")");
       }
       return;
     }
     switch (raw.status()) {
       case OPTIMAL -> result.status(SolveStatus.OPTIMAL);
-      case FEASIBLE -> result.status(SolveStatus.FEASIBLE).stopReason(StopReason.ofEarlyStop(options));
+      case FEASIBLE ->
+          result.status(SolveStatus.FEASIBLE).stopReason(StopReason.ofEarlyStop(options));
       case INFEASIBLE -> {
         if (atTimeLimit(raw, options)) {
           result
@@ -276,7 +283,9 @@ public final class OrToolsBackend implements SolverBackend {
         if (stopped) {
           result.status(SolveStatus.NO_SOLUTION_FOUND).stopReason(StopReason.ofEarlyStop(options));
         } else {
-          result.status(SolveStatus.ERROR).message(id() + " ended abnormally (" + raw.status() + ")");
+          result
+              .status(SolveStatus.ERROR)
+              .message(id() + " ended abnormally (" + raw.status() + ")");
         }
       }
       case MODEL_INVALID ->
@@ -314,9 +323,11 @@ public final class OrToolsBackend implements SolverBackend {
       result
           .status(SolveStatus.UNBOUNDED)
           .message(
-              "HiGHS said infeasible, but the model has a feasible point: the objective is unbounded");
+              "HiGHS said infeasible, but the model has a feasible point: the objective is"
+                  + " unbounded");
     } else if (status != MPSolver.ResultStatus.INFEASIBLE) {
-      result.warning("HiGHS said infeasible; the check for an unbounded objective was inconclusive");
+      result.warning(
+          "HiGHS said infeasible; the check for an unbounded objective was inconclusive");
     }
   }
 }

@@ -208,9 +208,9 @@ public final class OrToolsNatives {
   }
 
   /**
-   * Tells OR-Tools' loader that its natives are in, so a later {@code
-   * Loader.loadNativeLibraries()} elsewhere in the JVM does not unpack a second copy. Best effort:
-   * if its private flag is renamed in a later version, that call merely costs a second unpack.
+   * Tells OR-Tools' loader that its natives are in, so a later {@code Loader.loadNativeLibraries()}
+   * elsewhere in the JVM does not unpack a second copy. Best effort: if its private flag is renamed
+   * in a later version, that call merely costs a second unpack.
    */
   private static void markLoaderDone() {
     try {

@@ -53,11 +53,14 @@ final class OrToolsRun {
     this.vars = vars;
   }
 
-  /** Writes the model into a new native solver, its objective replaced when {@code feasibilityOnly}. */
+  /**
+   * Writes the model into a new native solver, its objective replaced when {@code feasibilityOnly}.
+   */
   static OrToolsRun create(Engine engine, Milp milp, boolean feasibilityOnly) {
     MPSolver solver = MPSolver.createSolver(engine.solverName());
     if (solver == null) {
-      throw new IllegalStateException("OR-Tools has no " + engine.solverName() + " engine in this build");
+      throw new IllegalStateException(
+          "OR-Tools has no " + engine.solverName() + " engine in this build");
     }
     solver.suppressOutput();
     MPVariable[] vars = new MPVariable[milp.columnCount()];
@@ -85,7 +88,11 @@ final class OrToolsRun {
   }
 
   /** Applies the caller's options; what cannot be applied becomes a warning. */
-  void configure(SolveOptions options, Duration timeLimit, Optional<double[]> hint, SolveResult.Builder warnings) {
+  void configure(
+      SolveOptions options,
+      Duration timeLimit,
+      Optional<double[]> hint,
+      SolveResult.Builder warnings) {
     if (timeLimit != null) {
       solver.setTimeLimit(Math.max(1, timeLimit.toMillis()));
     }
@@ -100,10 +107,11 @@ final class OrToolsRun {
           solver.setSolverSpecificParametersAsString("output_flag=false");
       case CP_SAT -> {
         if (!solver.setSolverSpecificParametersAsString("mip_var_scaling: " + CP_SAT_SCALING)) {
-          warnings.warning("CP-SAT refused its scaling parameter; it may call feasible models infeasible");
+          warnings.warning(
+              "CP-SAT refused its scaling parameter; it may call feasible models infeasible");
         }
       }
-      default -> { }
+      default -> {}
     }
     if (hint.isPresent()) {
       if (engine.takesHint()) {
@@ -144,7 +152,8 @@ final class OrToolsRun {
           bound = solver.objective().bestBound();
         }
       }
-      return new Raw(status, unknown, bound, nodes(), values, Duration.ofNanos(System.nanoTime() - start));
+      return new Raw(
+          status, unknown, bound, nodes(), values, Duration.ofNanos(System.nanoTime() - start));
     } finally {
       free();
     }

@@ -77,8 +77,8 @@ final class StaleUnpacks {
   }
 
   /**
-   * Every file mapped by a live process, or empty when {@code /proc} cannot be read (not Linux),
-   * in which case nothing may be removed.
+   * Every file mapped by a live process, or empty when {@code /proc} cannot be read (not Linux), in
+   * which case nothing may be removed.
    */
   static Optional<Set<String>> mappedFiles(Path proc) {
     if (!Files.isReadable(proc.resolve("self").resolve("maps"))) {
@@ -127,13 +127,15 @@ final class StaleUnpacks {
           dir,
           new SimpleFileVisitor<>() {
             @Override
-            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs)
+                throws IOException {
               Files.delete(file);
               return FileVisitResult.CONTINUE;
             }
 
             @Override
-            public FileVisitResult postVisitDirectory(Path d, IOException failure) throws IOException {
+            public FileVisitResult postVisitDirectory(Path d, IOException failure)
+                throws IOException {
               if (failure != null) {
                 throw failure;
               }

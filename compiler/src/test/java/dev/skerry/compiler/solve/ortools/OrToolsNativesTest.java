@@ -32,7 +32,8 @@ class OrToolsNativesTest {
       long written = Files.getLastModifiedTime(library).toMillis();
       Path second = OrToolsNatives.cachedNatives();
       long t2 = System.nanoTime();
-      System.out.printf("natives cache: first fill %.0f ms, reuse %.1f ms%n", (t1 - t0) / 1e6, (t2 - t1) / 1e6);
+      System.out.printf(
+          "natives cache: first fill %.0f ms, reuse %.1f ms%n", (t1 - t0) / 1e6, (t2 - t1) / 1e6);
       assertEquals(first, second);
       assertTrue(first.startsWith(cache), first::toString);
       assertTrue(Files.size(library) > 1_000_000, "libjniortools is megabytes");

@@ -40,7 +40,8 @@ class StaleUnpacksTest {
       MappedByteBuffer inUse = ch.map(FileChannel.MapMode.READ_ONLY, 0, 4096);
       long start = System.nanoTime();
       StaleUnpacks.Report report = StaleUnpacks.clean(temp, StaleUnpacks.MIN_AGE);
-      System.out.printf("stale clean-up scanned /proc in %.1f ms%n", (System.nanoTime() - start) / 1e6);
+      System.out.printf(
+          "stale clean-up scanned /proc in %.1f ms%n", (System.nanoTime() - start) / 1e6);
       assertEquals(List.of(stale), report.removed());
       assertEquals(List.of(mapped), report.inUse());
       assertEquals(4096, report.bytesFreed());
