@@ -138,6 +138,27 @@ class KnownOptimaTest {
     return b.build();
   }
 
+  /** x + y ≥ 3 and x + y ≤ 2 with no integer column at all. */
+  static Milp pureLpInfeasible() {
+    MilpBuilder b = new MilpBuilder("pure_lp_infeasible");
+    Variable x = b.newContinuous("x", 0, 10, Origin.NONE);
+    Variable y = b.newContinuous("y", 0, 10, Origin.NONE);
+    b.addGreaterOrEqual("at_least", LinearExpr.of(x).add(y), 3, Origin.NONE);
+    b.addLessOrEqual("at_most", LinearExpr.of(x).add(y), 2, Origin.NONE);
+    b.minimize(LinearExpr.of(x));
+    return b.build();
+  }
+
+  /** max x + y with x − y ≤ 1: both grow together without limit. */
+  static Milp pureLpUnbounded() {
+    MilpBuilder b = new MilpBuilder("pure_lp_unbounded");
+    Variable x = b.newContinuous("x", 0, Double.POSITIVE_INFINITY, Origin.NONE);
+    Variable y = b.newContinuous("y", 0, Double.POSITIVE_INFINITY, Origin.NONE);
+    b.addLessOrEqual("link", LinearExpr.of(x).add(y, -1), 1, Origin.NONE);
+    b.maximize(LinearExpr.of(x).add(y));
+    return b.build();
+  }
+
   /** max x with x − y ≤ 1, y an unbounded integer: x grows with y without limit. */
   static Milp unbounded() {
     MilpBuilder b = new MilpBuilder("unbounded");
@@ -188,7 +209,7 @@ class KnownOptimaTest {
   @ParameterizedTest(name = "{0}")
   @MethodSource("dev.skerry.compiler.solve.TestBackends#exactStream")
   void infeasibleModelsAreInfeasible(SolverBackend backend) {
-    for (Milp m : new Milp[] {integerInfeasible(), lpInfeasible()}) {
+    for (Milp m : new Milp[] {integerInfeasible(), lpInfeasible(), pureLpInfeasible()}) {
       SolveResult r = backend.solve(m, SolveOptions.defaults());
       assertEquals(SolveStatus.INFEASIBLE, r.status(), () -> m.name() + ": " + r.summary());
       assertTrue(!r.hasValues(), r::summary);
@@ -197,9 +218,11 @@ class KnownOptimaTest {
 
   @ParameterizedTest(name = "{0}")
   @MethodSource("dev.skerry.compiler.solve.TestBackends#exactStream")
-  void unboundedModelIsUnbounded(SolverBackend backend) {
-    SolveResult r = backend.solve(unbounded(), SolveOptions.defaults());
-    assertEquals(SolveStatus.UNBOUNDED, r.status(), r::summary);
+  void unboundedModelsAreUnbounded(SolverBackend backend) {
+    for (Milp m : new Milp[] {unbounded(), pureLpUnbounded()}) {
+      SolveResult r = backend.solve(m, SolveOptions.defaults());
+      assertEquals(SolveStatus.UNBOUNDED, r.status(), () -> m.name() + ": " + r.summary());
+    }
   }
 
   /** CP-SAT on the same models: pure-integer ones exactly, the LP within its scaling error. */

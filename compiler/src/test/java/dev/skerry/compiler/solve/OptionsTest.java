@@ -64,5 +64,9 @@ class OptionsTest {
     assertEquals(SolveStatus.OPTIMAL, r.status(), r::summary);
     assertTrue(r.objective() >= optimum - 1e-6, r::summary);
     assertTrue(r.objective() <= optimum / (1 - 0.2) + 1e-6, r::summary);
+    if (!Double.isNaN(r.bestBound())) {
+      assertTrue(r.bestBound() <= optimum + 1e-6, "a bound above the optimum: " + r.bestBound());
+      assertTrue(r.gap() <= 0.2 + 1e-9, r::summary);
+    }
   }
 }

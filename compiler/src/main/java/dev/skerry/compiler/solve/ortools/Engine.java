@@ -13,7 +13,9 @@ public enum Engine {
   CBC("cbc", "CBC", true, true, false),
   /**
    * HiGHS: exact; a hint crashed the JVM (native SIGSEGV), so none is passed; cannot be
-   * interrupted; reports an unbounded model as INFEASIBLE (measured), which the backend checks.
+   * interrupted; reports an unbounded model as INFEASIBLE, which the backend checks; ignores
+   * MPSolver's gap parameter, so the gap goes as its own option; its best bound is not reported
+   * (all measured).
    */
   HIGHS("highs", "HIGHS", false, true, false),
   /**

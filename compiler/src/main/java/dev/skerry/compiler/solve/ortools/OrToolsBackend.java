@@ -17,8 +17,10 @@ import dev.skerry.compiler.solve.StopReason;
 import dev.skerry.compiler.solve.WarmStart;
 import java.time.Duration;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
@@ -38,6 +40,7 @@ public final class OrToolsBackend implements SolverBackend {
 
   private static final Duration POLL = Duration.ofMillis(20);
 
+  private static final Map<Engine, Capability> ENGINES = new ConcurrentHashMap<>();
   private static boolean loggingReady;
 
   private final Engine engine;
@@ -67,6 +70,16 @@ public final class OrToolsBackend implements SolverBackend {
     if (!natives.loaded()) {
       return Capability.no(natives.failure());
     }
+    return ENGINES.computeIfAbsent(engine, OrToolsBackend::probe);
+  }
+
+  /** Whether this OR-Tools build has the engine: asked once per engine and JVM. */
+  private static Capability probe(Engine engine) {
+    MPSolver solver = MPSolver.createSolver(engine.solverName());
+    if (solver == null) {
+      return Capability.no("OR-Tools has no " + engine.solverName() + " engine in this build");
+    }
+    solver.delete();
     return Capability.yes();
   }
 
