@@ -16,7 +16,8 @@ import java.util.Locale;
  *     without values
  * @param bestBound the best proven bound on the objective, constant included; NaN when unknown
  * @param gap {@code |objective − bestBound| / |objective|}; NaN when either is unknown
- * @param values one value per column, by column index; null when the solve has no values
+ * @param values one value per column, by column index; null when the solve has no values. An ERROR
+ *     result may keep the values a backend returned, for diagnosis only
  * @param wallTime wall-clock time of the whole call, model translation included
  * @param nodes branch-and-bound nodes, or -1 when the backend does not say
  * @param maxViolation the largest violation of a bound, row or integrality at {@code values} (see
