@@ -1,0 +1,27 @@
+package dev.skerry.compiler.solve;
+
+import dev.skerry.compiler.milp.Milp;
+
+/**
+ * One way of solving a {@link Milp}: says whether it can take a model, then solves it. A backend
+ * never throws for a model it declared itself capable of; every outcome, failures included, comes
+ * back as a {@link SolveResult} with a status.
+ */
+public interface SolverBackend {
+  /** The id a user types to choose this backend, e.g. {@code scip}. */
+  String id();
+
+  /** Whether this backend can solve the model here and now, and if not, why. */
+  Capability capableOf(Milp model);
+
+  /**
+   * Solves the model. Progress goes to the monitor from the backend's own threads; the monitor must
+   * return quickly. The values of a result are checked against the model before it is returned (see
+   * {@link SolutionCheck}).
+   */
+  SolveResult solve(Milp model, SolveOptions options, SolveMonitor monitor);
+
+  default SolveResult solve(Milp model, SolveOptions options) {
+    return solve(model, options, SolveMonitor.NONE);
+  }
+}
