@@ -16,7 +16,7 @@ import picocli.CommandLine.Command;
       "Scenario language and MILP compiler for planning vehicle trajectories.",
       "Planning aid only, not certified guidance software."
     },
-    subcommands = {CheckCommand.class, BuildCommand.class, SolveCommand.class, FmtCommand.class, DiffCommand.class, CommandLine.HelpCommand.class})
+    subcommands = {CheckCommand.class, BuildCommand.class, SolveCommand.class, RunCommand.class, CompareCommand.class, FmtCommand.class, DiffCommand.class, CommandLine.HelpCommand.class})
 public final class SkerryCli implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
@@ -34,7 +34,10 @@ public final class SkerryCli implements Runnable {
           + "\n(please report this with the scenario that caused it)");
       return 3;
     });
-    return cli.execute(args);
+    int code = cli.execute(args);
+    out.flush();
+    err.flush();
+    return code;
   }
 
   @Override

@@ -73,6 +73,11 @@ public record PlanOptions(
         timeLimit, relativeGap, threads, guard, on, range);
   }
 
+  public PlanOptions withClosedLoopMax(int iterations) {
+    return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, iterations, solver,
+        timeLimit, relativeGap, threads, guard, pruning, range);
+  }
+
   public PlanOptions withGuard(boolean on) {
     return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver,
         timeLimit, relativeGap, threads, on, pruning, range);

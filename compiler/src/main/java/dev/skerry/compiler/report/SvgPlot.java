@@ -48,7 +48,13 @@ public final class SvgPlot {
   }
 
   public static String render(Scenario scenario, Trajectory path, List<ClusterBox> clusters, String title) {
-    return new SvgPlot(scenario).draw(path, clusters == null ? List.of() : clusters, title);
+    return new SvgPlot(scenario).draw(path, null, clusters == null ? List.of() : clusters, title);
+  }
+
+  /** The flown path with, dashed, the path predicted by the first plan. */
+  public static String render(Scenario scenario, Trajectory flown, Trajectory predicted, List<ClusterBox> clusters,
+      String title) {
+    return new SvgPlot(scenario).draw(flown, predicted, clusters == null ? List.of() : clusters, title);
   }
 
   private double x(double wx) {
@@ -67,7 +73,7 @@ public final class SvgPlot {
     return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
   }
 
-  private String draw(Trajectory path, List<ClusterBox> clusters, String title) {
+  private String draw(Trajectory path, Trajectory predicted, List<ClusterBox> clusters, String title) {
     int height = plotHeight + 2 * MARGIN + 40;
     out.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
     out.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"").append(WIDTH).append("\" height=\"").append(height)
@@ -108,6 +114,14 @@ public final class SvgPlot {
       out.append("<g class=\"waypoint\">").append(shape(new Shape.Box(w.region()), "none", TARGET, "1.5", "2 2"))
           .append("</g>\n");
     }
+    if (predicted != null) {
+      out.append("<g id=\"predicted\"><polyline fill=\"none\" stroke=\"").append(PATH)
+          .append("\" stroke-width=\"1.5\" stroke-dasharray=\"5 4\" stroke-opacity=\"0.6\" points=\"");
+      for (Sample p : predicted.flown()) {
+        out.append(f(x(p.position().x()))).append(',').append(f(y(p.position().y()))).append(' ');
+      }
+      out.append("\"/></g>\n");
+    }
     if (path != null) {
       path(path);
     }
@@ -115,7 +129,7 @@ public final class SvgPlot {
     out.append("<circle id=\"start\" cx=\"").append(f(x(start.x()))).append("\" cy=\"").append(f(y(start.y())))
         .append("\" r=\"5\" fill=\"white\" stroke=\"").append(INK).append("\" stroke-width=\"2\"/>\n");
     scaleBar();
-    legend(path != null, !clusters.isEmpty());
+    legend(path != null, !clusters.isEmpty(), predicted != null);
     out.append("<text x=\"").append(MARGIN).append("\" y=\"").append(height - 12).append("\" font-size=\"10\" fill=\"#555\">")
         .append("Planning aid, not certified guidance: check local aviation or maritime rules and licensed practice; ")
         .append("the radius margin is the user's choice.</text>\n");
@@ -206,7 +220,7 @@ public final class SvgPlot {
         .append("\" font-size=\"10\" fill=\"").append(INK).append("\">").append(Format.number(length)).append(" m</text></g>\n");
   }
 
-  private void legend(boolean hasPath, boolean hasClusters) {
+  private void legend(boolean hasPath, boolean hasClusters, boolean hasPrediction) {
     double lx = WIDTH - LEGEND + 10;
     double ly = MARGIN;
     out.append("<g id=\"legend\" font-size=\"11\" fill=\"").append(INK).append("\">\n");
@@ -228,6 +242,10 @@ public final class SvgPlot {
       ly = legendRow(lx, ly, "<line x1=\"0\" y1=\"5\" x2=\"14\" y2=\"5\" stroke=\"" + PATH + "\" stroke-width=\"2\"/>",
           "path, dot per step");
       ly = legendRow(lx, ly, "<rect x=\"2\" width=\"10\" height=\"10\" fill=\"white\" stroke=\"" + PATH + "\"/>", "arrival");
+    }
+    if (hasPrediction) {
+      ly = legendRow(lx, ly, "<line x1=\"0\" y1=\"5\" x2=\"14\" y2=\"5\" stroke=\"" + PATH
+          + "\" stroke-dasharray=\"5 4\"/>", "first prediction");
     }
     legendRow(lx, ly, "<circle cx=\"7\" cy=\"5\" r=\"5\" fill=\"white\" stroke=\"" + INK + "\"/>", "start");
     out.append("</g>\n");
