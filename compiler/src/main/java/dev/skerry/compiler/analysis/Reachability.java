@@ -47,8 +47,13 @@ public record Reachability(Bounds keepIn, List<Bounds> positions, List<Bounds> v
     List<Bounds> positions = new ArrayList<>(n + 1);
     List<Bounds> velocities = new ArrayList<>(n + 1);
     boolean reported = false;
+    // Boxes grow by the solvers' feasibility tolerance: a plan that runs exactly along the limits
+    // (bang-bang) sits on the box's edge, and a state read back from a solver is off by ~1e-9, so
+    // without this margin re-planning from it (closed loop) could prune away its own tail.
+    double eps = 1e-6 * Math.max(1, Math.hypot(keepIn.width(), keepIn.height()));
     for (int k = 0; k <= n; k++) {
-      Bounds raw = new Bounds(x[0][k], y[0][k], x[1][k], y[1][k]);
+      double pad = k == 0 ? 0 : eps;
+      Bounds raw = new Bounds(x[0][k] - pad, y[0][k] - pad, x[1][k] + pad, y[1][k] + pad);
       Bounds box = raw;
       if (k > 0) {
         Bounds cut = raw.intersect(keepIn);
@@ -61,7 +66,8 @@ public record Reachability(Bounds keepIn, List<Bounds> positions, List<Bounds> v
         }
       }
       positions.add(box);
-      velocities.add(new Bounds(x[2][k], y[2][k], x[3][k], y[3][k]));
+      double vpad = k == 0 ? 0 : eps / Math.max(dt, 1e-9);
+      velocities.add(new Bounds(x[2][k] - vpad, y[2][k] - vpad, x[3][k] + vpad, y[3][k] + vpad));
     }
     if (!keepIn.contains(v.start())) {
       facts.add(new Fact("start-outside-area", v.name(), 0,

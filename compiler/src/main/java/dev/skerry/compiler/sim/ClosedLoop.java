@@ -66,6 +66,7 @@ public final class ClosedLoop {
       double seconds = r.solve().wallTime().toNanos() / 1e9;
       Vec2 u;
       boolean fallback;
+      boolean planArrivesNext = r.hasPlan() && r.trajectory().arrival() <= 1;
       double predicted;
       if (r.hasPlan()) {
         if (firstPrediction == null) {
@@ -101,7 +102,7 @@ public final class ClosedLoop {
           wt * flownTime + wf * flownFuel, fallback, r.clusters());
       iterations.add(it);
       listener.onIteration(it);
-      if (arrived(scenario, p, v)) {
+      if (arrived(scenario, p, v, 0) || (planArrivesNext && arrived(scenario, p, v, disturbance * dt))) {
         stop = LoopResult.Stop.ARRIVED;
         break;
       }
@@ -112,15 +113,19 @@ public final class ClosedLoop {
         wt * flownTime + wf * flownFuel, Verifier.verify(scenario, path));
   }
 
-  /** In the target (and at rest when asked), within a small tolerance of the solver's accuracy. */
-  static boolean arrived(Scenario s, Vec2 p, Vec2 v) {
+  /**
+   * In the target (and at rest when asked), within the solver's accuracy plus {@code slack}: when the
+   * plan applied arrives at the next step, a disturbed plant counts as arrived within what one
+   * step of disturbance can move it (slack in metres, slack/Δt·Δt in m/s).
+   */
+  static boolean arrived(Scenario s, Vec2 p, Vec2 v, double slack) {
     var b = s.area().bounds();
-    double tol = 1e-5 * Math.max(1, Math.hypot(b.width(), b.height()));
+    double tol = 1e-5 * Math.max(1, Math.hypot(b.width(), b.height())) + slack;
     for (Shape.Face f : s.target().region().faces()) {
       if (f.normal().dot(p) > f.offset() + tol) {
         return false;
       }
     }
-    return !s.target().atRest() || v.norm() <= 1e-5 * Math.max(1, s.vehicle().maxSpeed());
+    return !s.target().atRest() || v.norm() <= 1e-5 * Math.max(1, s.vehicle().maxSpeed()) + slack / s.plan().step() * 1.5;
   }
 }
