@@ -1,0 +1,22 @@
+package dev.skerry.lsp.analysis;
+
+import dev.skerry.compiler.check.CheckResult;
+import dev.skerry.compiler.source.SourceFile;
+import dev.skerry.lsp.document.Document;
+import java.nio.file.Path;
+import java.util.Set;
+
+/** What checking one version of a document gave, and the files it read (for re-checking dependents). */
+public record AnalysisResult(Document document, CheckResult check, Set<Path> filesRead) {
+  public AnalysisResult {
+    filesRead = Set.copyOf(filesRead);
+  }
+
+  public SourceFile main() {
+    return document.source();
+  }
+
+  public boolean isMain(SourceFile file) {
+    return file == document.source();
+  }
+}
