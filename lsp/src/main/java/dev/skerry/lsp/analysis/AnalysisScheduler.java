@@ -125,7 +125,13 @@ public final class AnalysisScheduler implements AutoCloseable {
       }
     }
     runs.incrementAndGet();
-    AnalysisResult result = analyzer.analyze(document);
+    AnalysisResult result;
+    try {
+      result = analyzer.analyze(document);
+    } catch (RuntimeException | Error e) {
+      failed(document, generation, e);
+      throw e;
+    }
     CompletableFuture<AnalysisResult> promise;
     synchronized (this) {
       Slot slot = slots.get(document.uri());
@@ -142,6 +148,20 @@ public final class AnalysisScheduler implements AutoCloseable {
       System.err.println("skerry-lsp: publishing the analysis of " + document.uri() + " failed: " + e);
     }
     promise.complete(result);
+  }
+
+  /** Fails the waiting requests of a run that threw, so none of them hangs. */
+  private void failed(Document document, long generation, Throwable e) {
+    CompletableFuture<AnalysisResult> promise;
+    synchronized (this) {
+      Slot slot = slots.get(document.uri());
+      if (slot == null || slot.generation != generation) {
+        return;
+      }
+      promise = slot.promise;
+      slot.promise = new CompletableFuture<>();
+    }
+    promise.completeExceptionally(new IllegalStateException("checking " + document.uri() + " failed: " + e, e));
   }
 
   /** Analyses run to the end (published or not). */

@@ -32,7 +32,7 @@ public final class Analyzer {
     CheckResult check;
     try {
       check = ScenarioChecker.check(document.source(), loader);
-    } catch (RuntimeException | StackOverflowError e) {
+    } catch (RuntimeException | LinkageError | StackOverflowError e) {
       System.err.println("skerry-lsp: checking " + document.uri() + " failed: " + e);
       check = new CheckResult(List.of(new ScenarioFile(document.source(), List.of())), new SymbolTable(), null,
           List.of());
