@@ -117,7 +117,11 @@ final class TextDocuments implements TextDocumentService {
       } else {
         int start = Ranges.offset(document.source(), range.getStart());
         int end = Ranges.offset(document.source(), range.getEnd());
-        document = document.edit(version, Math.min(start, end), Math.max(start, end), change.getText());
+        if (start > end) {
+          System.err.println("skerry-lsp: ignored a change to " + document.uri() + " whose range ends before it starts");
+          continue;
+        }
+        document = document.edit(version, start, end, change.getText());
       }
     }
     store.put(document);
