@@ -16,8 +16,9 @@ import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
 
 /**
- * Runs analyses off the request threads. An edit (re)starts a short timer; when it fires the
- * latest version is checked on a worker. A run whose document changed meanwhile is thrown away
+ * Runs analyses off the request threads. The first edit after a quiet spell is checked at once;
+ * an edit that follows another within the delay (re)starts a timer, so a burst of typing is
+ * checked once, the delay after its last key. Checks run on a worker. A run whose document changed meanwhile is thrown away
  * and never published. A request that needs the result now skips the timer.
  */
 public final class AnalysisScheduler implements AutoCloseable {
@@ -35,6 +36,7 @@ public final class AnalysisScheduler implements AutoCloseable {
     Document document;
     long generation;
     ScheduledFuture<?> timer;
+    long lastEdit = Long.MIN_VALUE / 2;
     CompletableFuture<AnalysisResult> promise = new CompletableFuture<>();
     AnalysisResult last;
   }
@@ -75,10 +77,11 @@ public final class AnalysisScheduler implements AutoCloseable {
     if (slot.promise.isDone()) {
       slot.promise = new CompletableFuture<>();
     }
-    if (slot.timer != null) {
-      slot.timer.cancel(false);
-    }
-    slot.timer = timers.schedule(() -> workers.execute(() -> run(document, generation)), delay.toMillis(),
+    boolean waiting = slot.timer != null && slot.timer.cancel(false);
+    long now = System.nanoTime();
+    boolean quiet = !waiting && now - slot.lastEdit >= delay.toNanos();
+    slot.lastEdit = now;
+    slot.timer = timers.schedule(() -> workers.execute(() -> run(document, generation)), quiet ? 0 : delay.toMillis(),
         TimeUnit.MILLISECONDS);
   }
 
