@@ -34,7 +34,8 @@ public final class Completions {
 
   private static final Pattern AFTER_NUMBER = Pattern.compile("(?:^|[\\s(,=+\\-*/])[0-9]+(?:\\.[0-9]*)?(?:[eE][+-]?[0-9]+)?\\s*$");
   private static final Pattern WORD = Pattern.compile("[A-Za-z_][A-Za-z_0-9]*|\\)|[0-9.]+");
-  private static final Set<String> COUNT_KEYWORDS = Set.of("horizon", "sides", "clusters", "threads");
+  /** Lines whose numbers are counts or weights, never quantities with a unit. */
+  private static final Set<String> UNITLESS = Set.of("horizon", "sides", "clusters", "minimize");
 
   private Completions() {}
 
@@ -86,7 +87,7 @@ public final class Completions {
     }
     List<Item> out = new ArrayList<>();
     String first = words.get(0);
-    if (AFTER_NUMBER.matcher(before).find() && !COUNT_KEYWORDS.contains(first)) {
+    if (AFTER_NUMBER.matcher(before).find() && !UNITLESS.contains(first)) {
       for (String u : units()) {
         out.add(new Item(u, Kind.UNIT, "unit"));
       }
