@@ -6,8 +6,11 @@ import dev.skerry.lsp.document.Document;
 import java.nio.file.Path;
 import java.util.Set;
 
-/** What checking one version of a document gave, and the files it read (for re-checking dependents). */
-public record AnalysisResult(Document document, CheckResult check, Set<Path> filesRead) {
+/**
+ * What checking one version of a document gave, the files it read (for re-checking dependents),
+ * and the predicted sizes when a size estimator is wired and the scenario checks (else null).
+ */
+public record AnalysisResult(Document document, CheckResult check, Set<Path> filesRead, SizeEstimator.PlanSizes sizes) {
   public AnalysisResult {
     filesRead = Set.copyOf(filesRead);
   }

@@ -21,10 +21,13 @@ import java.util.function.Supplier;
 public final class Analyzer {
   private final DocumentStore store;
   private final Supplier<Path> workspaceRoot;
+  private final SizeEstimator sizes;
 
-  public Analyzer(DocumentStore store, Supplier<Path> workspaceRoot) {
+  /** {@code sizes} may be null: then no sizes are predicted. */
+  public Analyzer(DocumentStore store, Supplier<Path> workspaceRoot, SizeEstimator sizes) {
     this.store = store;
     this.workspaceRoot = workspaceRoot;
+    this.sizes = sizes;
   }
 
   public AnalysisResult analyze(Document document) {
@@ -43,7 +46,19 @@ public final class Analyzer {
         read.add(f.source().path().toAbsolutePath().normalize());
       }
     }
-    return new AnalysisResult(document, check, read);
+    return new AnalysisResult(document, check, read, estimate(document, check));
+  }
+
+  private SizeEstimator.PlanSizes estimate(Document document, CheckResult check) {
+    if (sizes == null || check.scenario() == null) {
+      return null;
+    }
+    try {
+      return sizes.estimate(check.scenario()).orElse(null);
+    } catch (RuntimeException e) {
+      System.err.println("skerry-lsp: predicting the sizes of " + document.uri() + " failed: " + e);
+      return null;
+    }
   }
 
   /** The workspace root when the document lies inside it, else the document's own folder. */

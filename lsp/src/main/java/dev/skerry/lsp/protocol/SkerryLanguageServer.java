@@ -3,6 +3,7 @@ package dev.skerry.lsp.protocol;
 import dev.skerry.lsp.analysis.AnalysisResult;
 import dev.skerry.lsp.analysis.AnalysisScheduler;
 import dev.skerry.lsp.analysis.Analyzer;
+import dev.skerry.lsp.analysis.SizeEstimator;
 import dev.skerry.lsp.document.DocumentStore;
 import dev.skerry.lsp.document.Uris;
 import java.nio.file.Path;
@@ -39,12 +40,20 @@ public final class SkerryLanguageServer implements LanguageServer, LanguageClien
   private volatile LanguageClient client;
   private volatile boolean shutdown;
 
+  private final boolean sizes;
+
   /** {@code exit} receives the process exit code on the {@code exit} notification. */
   public SkerryLanguageServer(Duration debounce, IntConsumer exit) {
+    this(debounce, exit, null);
+  }
+
+  /** With {@code sizes} (may be null), the server shows predicted MILP sizes and offers inlay hints. */
+  public SkerryLanguageServer(Duration debounce, IntConsumer exit, SizeEstimator sizes) {
     this.exit = exit;
+    this.sizes = sizes != null;
     Locations locations = new Locations(store);
     this.converter = new DiagnosticConverter(locations);
-    this.scheduler = new AnalysisScheduler(new Analyzer(store, () -> root), debounce, this::publish);
+    this.scheduler = new AnalysisScheduler(new Analyzer(store, () -> root, sizes), debounce, this::publish);
     this.textDocuments = new TextDocuments(store, scheduler, locations, converter, this::clear);
     this.workspace = new Workspace(store, scheduler);
   }
@@ -66,7 +75,11 @@ public final class SkerryLanguageServer implements LanguageServer, LanguageClien
     caps.setDocumentSymbolProvider(true);
     caps.setFoldingRangeProvider(true);
     caps.setCompletionProvider(new CompletionOptions(false, List.of()));
-    caps.setCodeActionProvider(new CodeActionOptions(List.of(CodeActionKind.QuickFix)));
+    caps.setCodeActionProvider(new CodeActionOptions(sizes ? List.of(CodeActionKind.QuickFix,
+        CodeActionKind.RefactorRewrite) : List.of(CodeActionKind.QuickFix)));
+    if (sizes) {
+      caps.setInlayHintProvider(true);
+    }
     return CompletableFuture.completedFuture(new InitializeResult(caps, new ServerInfo("skerry", version())));
   }
 

@@ -10,6 +10,7 @@ import dev.skerry.lsp.protocol.feature.HoverHandler;
 import dev.skerry.lsp.protocol.feature.NavigationHandler;
 import dev.skerry.lsp.protocol.feature.OutlineHandler;
 import dev.skerry.lsp.protocol.feature.RenameHandler;
+import dev.skerry.lsp.protocol.feature.SizeHandler;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutorService;
@@ -32,6 +33,8 @@ import org.eclipse.lsp4j.DocumentSymbolParams;
 import org.eclipse.lsp4j.FoldingRange;
 import org.eclipse.lsp4j.FoldingRangeRequestParams;
 import org.eclipse.lsp4j.Hover;
+import org.eclipse.lsp4j.InlayHint;
+import org.eclipse.lsp4j.InlayHintParams;
 import org.eclipse.lsp4j.HoverParams;
 import org.eclipse.lsp4j.Location;
 import org.eclipse.lsp4j.LocationLink;
@@ -70,6 +73,7 @@ final class TextDocuments implements TextDocumentService {
   private final OutlineHandler outline = new OutlineHandler();
   private final CompletionHandler completion = new CompletionHandler();
   private final CodeActionHandler codeActions;
+  private final SizeHandler sizes = new SizeHandler();
 
   TextDocuments(DocumentStore store, AnalysisScheduler scheduler, Locations locations, DiagnosticConverter converter,
       Consumer<String> onClose) {
@@ -210,5 +214,11 @@ final class TextDocuments implements TextDocumentService {
   @Override
   public CompletableFuture<List<Either<Command, CodeAction>>> codeAction(CodeActionParams params) {
     return withAnalysis(params == null ? null : params.getTextDocument(), r -> codeActions.actions(r, params.getRange()));
+  }
+
+  @Override
+  public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
+    return withAnalysis(params == null ? null : params.getTextDocument(),
+        r -> sizes.inlayHints(r, Ranges.toSource(r.main(), params.getRange())));
   }
 }

@@ -1,5 +1,6 @@
 package dev.skerry.lsp.protocol;
 
+import dev.skerry.lsp.analysis.SizeEstimator;
 import java.io.IOException;
 import java.io.PipedInputStream;
 import java.io.PipedOutputStream;
@@ -37,8 +38,12 @@ final class Harness implements AutoCloseable {
   private final PipedOutputStream toClient;
 
   Harness(Path root, Duration debounce) throws Exception {
+    this(root, debounce, null);
+  }
+
+  Harness(Path root, Duration debounce, SizeEstimator sizes) throws Exception {
     this.root = root.toAbsolutePath().normalize();
-    server = new SkerryLanguageServer(debounce, exitCode::set);
+    server = new SkerryLanguageServer(debounce, exitCode::set, sizes);
     PipedInputStream serverIn = new PipedInputStream(1 << 20);
     toServer = new PipedOutputStream(serverIn);
     PipedInputStream clientIn = new PipedInputStream(1 << 20);

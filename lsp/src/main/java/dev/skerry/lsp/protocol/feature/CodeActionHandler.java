@@ -27,6 +27,7 @@ import org.eclipse.lsp4j.jsonrpc.messages.Either;
 /** Quick fixes for what the checker diagnoses; each title says what the edit changes. */
 public final class CodeActionHandler {
   private final DiagnosticConverter converter;
+  private final SizeHandler sizes = new SizeHandler();
 
   public CodeActionHandler(DiagnosticConverter converter) {
     this.converter = converter;
@@ -53,6 +54,10 @@ public final class CodeActionHandler {
             List.of(new TextEdit(Ranges.of(fix.range()), fix.replacement())))));
         out.add(Either.forRight(action));
       }
+    }
+    CodeAction clusters = sizes.useClusters(result);
+    if (clusters != null && planTouches(result, asked)) {
+      out.add(Either.forRight(clusters));
     }
     return out;
   }
@@ -164,6 +169,15 @@ public final class CodeActionHandler {
       cur = swap;
     }
     return prev[b.length()];
+  }
+
+  private static boolean planTouches(AnalysisResult result, SourceRange asked) {
+    for (Decl decl : result.check().main().decls()) {
+      if (decl instanceof Decl.PlanDecl p && Ranges.touches(p.range(), asked)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private static List<PlanProp> planProps(AnalysisResult result) {

@@ -39,6 +39,9 @@ public final class HoverHandler {
       return null;
     }
     String text = describe(decl, result.check().scenario());
+    if (text != null && decl instanceof Decl.PlanDecl && result.sizes() != null) {
+      text = text + "\n" + String.join("\n", SizeHandler.hoverLines(result.sizes()));
+    }
     if (text == null) {
       return null;
     }
