@@ -14,6 +14,7 @@ import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
+import java.util.function.Function;
 
 /**
  * Runs analyses off the request threads. The first edit after a quiet spell is checked at once;
@@ -22,7 +23,7 @@ import java.util.function.Consumer;
  * and never published. A request that needs the result now skips the timer.
  */
 public final class AnalysisScheduler implements AutoCloseable {
-  private final Analyzer analyzer;
+  private final Function<Document, AnalysisResult> analyzer;
   private final Duration delay;
   private final Consumer<AnalysisResult> onResult;
   private final ScheduledExecutorService timers;
@@ -30,6 +31,7 @@ public final class AnalysisScheduler implements AutoCloseable {
   private final Map<String, Slot> slots = new HashMap<>();
   private final AtomicLong runs = new AtomicLong();
   private final AtomicLong discarded = new AtomicLong();
+  private boolean closed;
 
   /** The state of one open document; guarded by the scheduler. */
   private static final class Slot {
@@ -41,7 +43,8 @@ public final class AnalysisScheduler implements AutoCloseable {
     AnalysisResult last;
   }
 
-  public AnalysisScheduler(Analyzer analyzer, Duration delay, Consumer<AnalysisResult> onResult) {
+  /** {@code analyzer} checks one version (see {@link Analyzer#analyze}); {@code onResult} publishes a fresh result. */
+  public AnalysisScheduler(Function<Document, AnalysisResult> analyzer, Duration delay, Consumer<AnalysisResult> onResult) {
     this.analyzer = analyzer;
     this.delay = delay;
     this.onResult = onResult;
@@ -60,6 +63,9 @@ public final class AnalysisScheduler implements AutoCloseable {
 
   /** A new version of a document: check it after the delay, and re-check open files that include it. */
   public synchronized void update(Document document) {
+    if (closed) {
+      return;
+    }
     schedule(slots.computeIfAbsent(document.uri(), k -> new Slot()), document);
     if (document.path() == null) {
       return;
@@ -130,7 +136,7 @@ public final class AnalysisScheduler implements AutoCloseable {
     runs.incrementAndGet();
     AnalysisResult result;
     try {
-      result = analyzer.analyze(document);
+      result = analyzer.apply(document);
     } catch (RuntimeException | Error e) {
       failed(document, generation, e);
       throw e;
@@ -162,7 +168,6 @@ public final class AnalysisScheduler implements AutoCloseable {
         return;
       }
       promise = slot.promise;
-      slot.promise = new CompletableFuture<>();
     }
     promise.completeExceptionally(new IllegalStateException("checking " + document.uri() + " failed: " + e, e));
   }
@@ -183,6 +188,7 @@ public final class AnalysisScheduler implements AutoCloseable {
     workers.shutdownNow();
     List<Slot> open;
     synchronized (this) {
+      closed = true;
       open = List.copyOf(slots.values());
       slots.clear();
     }

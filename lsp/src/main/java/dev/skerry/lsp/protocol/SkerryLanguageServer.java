@@ -53,7 +53,7 @@ public final class SkerryLanguageServer implements LanguageServer, LanguageClien
     this.sizes = sizes != null;
     Locations locations = new Locations(store);
     this.converter = new DiagnosticConverter(locations);
-    this.scheduler = new AnalysisScheduler(new Analyzer(store, () -> root, sizes), debounce, this::publish);
+    this.scheduler = new AnalysisScheduler(new Analyzer(store, () -> root, sizes)::analyze, debounce, this::publish);
     this.textDocuments = new TextDocuments(store, scheduler, locations, converter, this::clear);
     this.workspace = new Workspace(store, scheduler);
   }

@@ -9,6 +9,7 @@ import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.model.Shape;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
+import dev.skerry.compiler.model.Waypoint;
 import dev.skerry.compiler.model.Zone;
 import dev.skerry.compiler.source.SourceRange;
 import dev.skerry.lsp.analysis.AnalysisResult;
@@ -66,7 +67,7 @@ public final class HoverHandler {
     } else if (decl instanceof Decl.TargetDecl t) {
       return target(t, scenario);
     } else if (decl instanceof Decl.WaypointDecl w) {
-      return "waypoint `" + w.name().text() + "`";
+      return waypoint(w, scenario);
     } else if (decl instanceof Decl.PlanDecl) {
       return plan(scenario);
     }
@@ -124,6 +125,17 @@ public final class HoverHandler {
     }
     return title + (scenario.target().atRest() ? ", arrive at rest" : "") + ", in SI units:\n- "
         + bounds(scenario.target().region().bounds());
+  }
+
+  private static String waypoint(Decl.WaypointDecl decl, Scenario scenario) {
+    String title = "waypoint `" + decl.name().text() + "`";
+    Waypoint w = scenario == null ? null
+        : scenario.waypoints().stream().filter(x -> x.name().equals(decl.name().text())).findFirst().orElse(null);
+    if (w == null) {
+      return title + "\n\n" + NOT_CHECKED;
+    }
+    return title + ", in SI units:\n- at " + point(w.point()) + " m, within " + Format.number(w.tolerance())
+        + " m on each axis\n- region: " + bounds(w.region());
   }
 
   private static String plan(Scenario scenario) {
