@@ -6,6 +6,7 @@ import dev.skerry.lsp.analysis.Analyzer;
 import dev.skerry.lsp.analysis.SizeEstimator;
 import dev.skerry.lsp.document.DocumentStore;
 import dev.skerry.lsp.document.Uris;
+import dev.skerry.lsp.protocol.feature.SemanticTokensHandler;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
@@ -18,6 +19,7 @@ import org.eclipse.lsp4j.InitializeParams;
 import org.eclipse.lsp4j.InitializeResult;
 import org.eclipse.lsp4j.PublishDiagnosticsParams;
 import org.eclipse.lsp4j.RenameOptions;
+import org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions;
 import org.eclipse.lsp4j.ServerCapabilities;
 import org.eclipse.lsp4j.ServerInfo;
 import org.eclipse.lsp4j.TextDocumentSyncKind;
@@ -77,6 +79,7 @@ public final class SkerryLanguageServer implements LanguageServer, LanguageClien
     caps.setCompletionProvider(new CompletionOptions(false, List.of()));
     caps.setCodeActionProvider(new CodeActionOptions(sizes ? List.of(CodeActionKind.QuickFix,
         CodeActionKind.RefactorRewrite) : List.of(CodeActionKind.QuickFix)));
+    caps.setSemanticTokensProvider(new SemanticTokensWithRegistrationOptions(SemanticTokensHandler.LEGEND, true));
     if (sizes) {
       caps.setInlayHintProvider(true);
     }

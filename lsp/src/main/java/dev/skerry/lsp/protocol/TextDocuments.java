@@ -10,6 +10,7 @@ import dev.skerry.lsp.protocol.feature.HoverHandler;
 import dev.skerry.lsp.protocol.feature.NavigationHandler;
 import dev.skerry.lsp.protocol.feature.OutlineHandler;
 import dev.skerry.lsp.protocol.feature.RenameHandler;
+import dev.skerry.lsp.protocol.feature.SemanticTokensHandler;
 import dev.skerry.lsp.protocol.feature.SizeHandler;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
@@ -43,6 +44,8 @@ import org.eclipse.lsp4j.PrepareRenameParams;
 import org.eclipse.lsp4j.PrepareRenameResult;
 import org.eclipse.lsp4j.Range;
 import org.eclipse.lsp4j.ReferenceParams;
+import org.eclipse.lsp4j.SemanticTokens;
+import org.eclipse.lsp4j.SemanticTokensParams;
 import org.eclipse.lsp4j.RenameParams;
 import org.eclipse.lsp4j.SymbolInformation;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
@@ -74,6 +77,7 @@ final class TextDocuments implements TextDocumentService {
   private final CompletionHandler completion = new CompletionHandler();
   private final CodeActionHandler codeActions;
   private final SizeHandler sizes = new SizeHandler();
+  private final SemanticTokensHandler semanticTokens = new SemanticTokensHandler();
 
   TextDocuments(DocumentStore store, AnalysisScheduler scheduler, Locations locations, DiagnosticConverter converter,
       Consumer<String> onClose) {
@@ -220,5 +224,10 @@ final class TextDocuments implements TextDocumentService {
   public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
     return withAnalysis(params == null ? null : params.getTextDocument(),
         r -> sizes.inlayHints(r, Ranges.toSource(r.main(), params.getRange())));
+  }
+
+  @Override
+  public CompletableFuture<SemanticTokens> semanticTokensFull(SemanticTokensParams params) {
+    return withAnalysis(params == null ? null : params.getTextDocument(), semanticTokens::full);
   }
 }
