@@ -37,6 +37,12 @@ public final class AnalysisScheduler implements AutoCloseable {
   private static final class Slot {
     Document document;
     long generation;
+    /** The generation a run has already started for; a second run of it stops at once. */
+    long started;
+    /** The generation whose finished run has claimed {@link #promise}; a newer edit needs a new one. */
+    long claimed;
+    /** The newest generation published; guarded by the slot itself, so publications never go back in time. */
+    long published;
     ScheduledFuture<?> timer;
     long lastEdit = Long.MIN_VALUE / 2;
     CompletableFuture<AnalysisResult> promise = new CompletableFuture<>();
@@ -79,13 +85,15 @@ public final class AnalysisScheduler implements AutoCloseable {
 
   private void schedule(Slot slot, Document document) {
     slot.document = document;
-    long generation = ++slot.generation;
-    if (slot.promise.isDone()) {
+    if (slot.promise.isDone() || slot.claimed == slot.generation) {
       slot.promise = new CompletableFuture<>();
     }
-    boolean waiting = slot.timer != null && slot.timer.cancel(false);
+    long generation = ++slot.generation;
+    if (slot.timer != null) {
+      slot.timer.cancel(false);
+    }
     long now = System.nanoTime();
-    boolean quiet = !waiting && now - slot.lastEdit >= delay.toNanos();
+    boolean quiet = now - slot.lastEdit >= delay.toNanos();
     slot.lastEdit = now;
     slot.timer = timers.schedule(() -> workers.execute(() -> run(document, generation)), quiet ? 0 : delay.toMillis(),
         TimeUnit.MILLISECONDS);
@@ -110,8 +118,10 @@ public final class AnalysisScheduler implements AutoCloseable {
     if (slot == null) {
       return CompletableFuture.completedFuture(null);
     }
-    if (!slot.promise.isDone() && slot.timer != null && slot.timer.cancel(false)) {
-      slot.timer = null;
+    if (!slot.promise.isDone() && slot.started != slot.generation) {
+      if (slot.timer != null) {
+        slot.timer.cancel(false);
+      }
       Document document = slot.document;
       long generation = slot.generation;
       workers.execute(() -> run(document, generation));
@@ -132,6 +142,10 @@ public final class AnalysisScheduler implements AutoCloseable {
         discarded.incrementAndGet();
         return;
       }
+      if (slot.started == generation) {
+        return;
+      }
+      slot.started = generation;
     }
     runs.incrementAndGet();
     AnalysisResult result;
@@ -142,19 +156,26 @@ public final class AnalysisScheduler implements AutoCloseable {
       throw e;
     }
     CompletableFuture<AnalysisResult> promise;
+    Slot slot;
     synchronized (this) {
-      Slot slot = slots.get(document.uri());
-      if (slot == null || slot.generation != generation || slot.promise.isDone()) {
+      slot = slots.get(document.uri());
+      if (slot == null || slot.generation != generation) {
         discarded.incrementAndGet();
         return;
       }
       slot.last = result;
+      slot.claimed = generation;
       promise = slot.promise;
     }
-    try {
-      onResult.accept(result);
-    } catch (RuntimeException e) {
-      System.err.println("skerry-lsp: publishing the analysis of " + document.uri() + " failed: " + e);
+    synchronized (slot) {
+      if (generation > slot.published) {
+        slot.published = generation;
+        try {
+          onResult.accept(result);
+        } catch (RuntimeException e) {
+          System.err.println("skerry-lsp: publishing the analysis of " + document.uri() + " failed: " + e);
+        }
+      }
     }
     promise.complete(result);
   }
@@ -167,6 +188,7 @@ public final class AnalysisScheduler implements AutoCloseable {
       if (slot == null || slot.generation != generation) {
         return;
       }
+      slot.claimed = generation;
       promise = slot.promise;
     }
     promise.completeExceptionally(new IllegalStateException("checking " + document.uri() + " failed: " + e, e));
@@ -185,7 +207,8 @@ public final class AnalysisScheduler implements AutoCloseable {
   @Override
   public void close() {
     timers.shutdownNow();
-    workers.shutdownNow();
+    // No interrupt: a run that is publishing finishes its message; queued runs find no slot and stop.
+    workers.shutdown();
     List<Slot> open;
     synchronized (this) {
       closed = true;

@@ -2,8 +2,10 @@ package dev.skerry.lsp.bench;
 
 import dev.skerry.lsp.Main;
 import dev.skerry.lsp.protocol.SkerryLanguageServer;
-import java.io.PipedInputStream;
-import java.io.PipedOutputStream;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.Pipe;
 import java.lang.management.ManagementFactory;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -34,7 +36,7 @@ import org.eclipse.lsp4j.services.LanguageClient;
 import org.eclipse.lsp4j.services.LanguageServer;
 
 /**
- * Measures the server over JSON-RPC in one JVM, on a generated scenario of about 2,000 lines:
+ * Measures the server over JSON-RPC through OS pipes in one JVM, on a generated scenario of about 2,000 lines:
  * time from a one-character edit to its published diagnostics (edits spaced like slow typing,
  * and in a fast burst), hover and completion latency, and the heap after a full collection.
  * Run: {@code java -cp lsp/target/classes:$(cat lsp/target/runtime-classpath.txt) dev.skerry.lsp.bench.LatencyBenchmark}
@@ -56,10 +58,12 @@ public final class LatencyBenchmark {
 
   private void run(int lines, int edits) throws Exception {
     SkerryLanguageServer server = new SkerryLanguageServer(Main.DEBOUNCE, code -> { });
-    PipedInputStream serverIn = new PipedInputStream(1 << 20);
-    PipedOutputStream toServer = new PipedOutputStream(serverIn);
-    PipedInputStream clientIn = new PipedInputStream(1 << 20);
-    PipedOutputStream toClient = new PipedOutputStream(clientIn);
+    Pipe up = Pipe.open();
+    InputStream serverIn = Channels.newInputStream(up.source());
+    OutputStream toServer = Channels.newOutputStream(up.sink());
+    Pipe down = Pipe.open();
+    InputStream clientIn = Channels.newInputStream(down.source());
+    OutputStream toClient = Channels.newOutputStream(down.sink());
     Launcher<LanguageClient> serverSide = LSPLauncher.createServerLauncher(server, serverIn, toClient);
     server.connect(serverSide.getRemoteProxy());
     serverSide.startListening();

@@ -89,8 +89,9 @@ final class TextDocuments implements TextDocumentService {
     this.codeActions = new CodeActionHandler(converter);
   }
 
+  /** Stops taking requests; answers already being written finish (an interrupt could cut one in half). */
   void close() {
-    requests.shutdownNow();
+    requests.shutdown();
   }
 
   @Override

@@ -2,8 +2,10 @@ package dev.skerry.lsp.protocol;
 
 import dev.skerry.lsp.analysis.SizeEstimator;
 import java.io.IOException;
-import java.io.PipedInputStream;
-import java.io.PipedOutputStream;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.Pipe;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -26,7 +28,7 @@ import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 import org.eclipse.lsp4j.services.LanguageServer;
 
-/** Our server and an LSP4J client over two pairs of piped streams, in one JVM, with a workspace folder. */
+/** Our server and an LSP4J client over two pipes, in one JVM, with a workspace folder. */
 final class Harness implements AutoCloseable {
   final Path root;
   final SkerryLanguageServer server;
@@ -34,8 +36,8 @@ final class Harness implements AutoCloseable {
   final RecordingClient client = new RecordingClient();
   final InitializeResult initialized;
   final AtomicInteger exitCode = new AtomicInteger(-1);
-  private final PipedOutputStream toServer;
-  private final PipedOutputStream toClient;
+  private final OutputStream toServer;
+  private final OutputStream toClient;
 
   Harness(Path root, Duration debounce) throws Exception {
     this(root, debounce, null);
@@ -44,10 +46,13 @@ final class Harness implements AutoCloseable {
   Harness(Path root, Duration debounce, SizeEstimator sizes) throws Exception {
     this.root = root.toAbsolutePath().normalize();
     server = new SkerryLanguageServer(debounce, exitCode::set, sizes);
-    PipedInputStream serverIn = new PipedInputStream(1 << 20);
-    toServer = new PipedOutputStream(serverIn);
-    PipedInputStream clientIn = new PipedInputStream(1 << 20);
-    toClient = new PipedOutputStream(clientIn);
+    // NIO pipes: java.io's piped streams fail a read once the thread that last wrote has ended.
+    Pipe toServerPipe = Pipe.open();
+    InputStream serverIn = Channels.newInputStream(toServerPipe.source());
+    toServer = Channels.newOutputStream(toServerPipe.sink());
+    Pipe toClientPipe = Pipe.open();
+    InputStream clientIn = Channels.newInputStream(toClientPipe.source());
+    toClient = Channels.newOutputStream(toClientPipe.sink());
     Launcher<LanguageClient> serverLauncher = LSPLauncher.createServerLauncher(server, serverIn, toClient);
     server.connect(serverLauncher.getRemoteProxy());
     serverLauncher.startListening();
@@ -101,6 +106,14 @@ final class Harness implements AutoCloseable {
     try {
       remote.shutdown().get(5, TimeUnit.SECONDS);
       remote.exit();
+    } catch (java.util.concurrent.TimeoutException e) {
+      Thread.getAllStackTraces().forEach((t, stack) -> {
+        System.err.println("thread " + t.getName() + " " + t.getState());
+        for (StackTraceElement el : stack) {
+          System.err.println("    at " + el);
+        }
+      });
+      throw e;
     } finally {
       toServer.close();
       toClient.close();

@@ -5,8 +5,9 @@ import com.google.gson.JsonParser;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.PipedInputStream;
-import java.io.PipedOutputStream;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.Pipe;
 import java.nio.charset.StandardCharsets;
 import java.time.Duration;
 import java.util.concurrent.BlockingQueue;
@@ -16,18 +17,20 @@ import org.eclipse.lsp4j.jsonrpc.Launcher;
 import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 
-/** Our server over piped streams, spoken to with hand-written JSON-RPC frames (including broken ones). */
+/** Our server over a pair of pipes, spoken to with hand-written JSON-RPC frames (including broken ones). */
 final class RawConnection implements AutoCloseable {
   final SkerryLanguageServer server = new SkerryLanguageServer(Duration.ofMillis(20), code -> { });
-  private final PipedOutputStream toServer;
-  private final PipedOutputStream fromServerSink;
+  private final OutputStream toServer;
+  private final OutputStream fromServerSink;
   private final BlockingQueue<JsonObject> received = new LinkedBlockingQueue<>();
 
   RawConnection() throws IOException {
-    PipedInputStream serverIn = new PipedInputStream(1 << 20);
-    toServer = new PipedOutputStream(serverIn);
-    PipedInputStream fromServer = new PipedInputStream(1 << 20);
-    fromServerSink = new PipedOutputStream(fromServer);
+    Pipe in = Pipe.open();
+    InputStream serverIn = Channels.newInputStream(in.source());
+    toServer = Channels.newOutputStream(in.sink());
+    Pipe out = Pipe.open();
+    InputStream fromServer = Channels.newInputStream(out.source());
+    fromServerSink = Channels.newOutputStream(out.sink());
     Launcher<LanguageClient> launcher = LSPLauncher.createServerLauncher(server, serverIn, fromServerSink);
     server.connect(launcher.getRemoteProxy());
     launcher.startListening();
