@@ -1,0 +1,21 @@
+package dev.skerry.lsp.analysis;
+
+import dev.skerry.compiler.model.Scenario;
+import java.util.Optional;
+
+/**
+ * Predicted MILP sizes of a checked scenario, from the compiler's analysis stage; the server
+ * never counts them itself. Called on an analysis worker, never on a request thread. A server
+ * started without one shows no sizes anywhere and does not offer inlay hints.
+ */
+public interface SizeEstimator {
+  Optional<PlanSizes> estimate(Scenario scenario);
+
+  /**
+   * The plan as written and one comparison (the unclustered plan when the plan clusters, else a
+   * suggested clustering), with {@code suggestedClusters} > 0 when the comparison is a suggestion.
+   */
+  record PlanSizes(Counts asWritten, Counts comparison, String comparisonLabel, int suggestedClusters) {}
+
+  record Counts(long binaries, long continuous, long rows) {}
+}

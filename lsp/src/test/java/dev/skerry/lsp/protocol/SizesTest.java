@@ -1,0 +1,90 @@
+package dev.skerry.lsp.protocol;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.skerry.lsp.analysis.SizeEstimator;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.TimeUnit;
+import org.eclipse.lsp4j.CodeAction;
+import org.eclipse.lsp4j.CodeActionContext;
+import org.eclipse.lsp4j.CodeActionParams;
+import org.eclipse.lsp4j.HoverParams;
+import org.eclipse.lsp4j.InlayHint;
+import org.eclipse.lsp4j.InlayHintParams;
+import org.eclipse.lsp4j.Range;
+import org.eclipse.lsp4j.TextEdit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Where sizes appear, with a stub in place of the compiler's size analysis (these counts are not a formula). */
+class SizesTest {
+  private static final SizeEstimator.PlanSizes STUB = new SizeEstimator.PlanSizes(
+      new SizeEstimator.Counts(3360, 1200, 4000), new SizeEstimator.Counts(260, 1300, 4200),
+      "with 2 clusters, ordered", 2);
+
+  @TempDir
+  Path dir;
+
+  @Test
+  void withoutAnEstimatorNoSizesAppearAnywhere() throws Exception {
+    String text = Marked.parse(NavigationAndHoverTest.SCENARIO).text();
+    try (Harness h = new Harness(dir)) {
+      assertNull(h.initialized.getCapabilities().getInlayHintProvider());
+      String uri = h.open("bay.skerry", text);
+      String plan = h.remote.getTextDocumentService().hover(new HoverParams(Harness.doc(uri),
+          Marked.position(text, text.indexOf("horizon")))).get(5, TimeUnit.SECONDS).getContents().getRight().getValue();
+      assertFalse(plan.contains("binaries"), plan);
+      assertEquals(List.of(), actions(h, uri, text));
+    }
+  }
+
+  @Test
+  void hintsAfterTheHorizonHoverAndAClusteringActionUseTheEstimate() throws Exception {
+    String text = Marked.parse(NavigationAndHoverTest.SCENARIO).text();
+    List<Integer> horizonsSeen = new CopyOnWriteArrayList<>();
+    SizeEstimator stub = scenario -> {
+      horizonsSeen.add(scenario.plan().horizon());
+      return Optional.of(STUB);
+    };
+    try (Harness h = new Harness(dir, Duration.ofMillis(20), stub)) {
+      assertTrue(h.initialized.getCapabilities().getInlayHintProvider().getLeft());
+      String uri = h.open("bay.skerry", text);
+      Range all = new Range(Marked.position(text, 0), Marked.position(text, text.length()));
+      List<InlayHint> hints = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(Harness.doc(uri), all))
+          .get(5, TimeUnit.SECONDS);
+      assertEquals(1, hints.size());
+      assertEquals(Marked.position(text, text.indexOf("horizon 60") + "horizon 60".length()), hints.get(0).getPosition());
+      assertEquals("binaries 3,360 · continuous 1,200 · rows 4,000", hints.get(0).getLabel().getLeft());
+      assertEquals(List.of(60), horizonsSeen);
+      String plan = h.remote.getTextDocumentService().hover(new HoverParams(Harness.doc(uri),
+          Marked.position(text, text.indexOf("horizon")))).get(5, TimeUnit.SECONDS).getContents().getRight().getValue();
+      assertTrue(plan.contains("- with 2 clusters, ordered: binaries 260 · continuous 1,300 · rows 4,200"), plan);
+      List<CodeAction> actions = actions(h, uri, text);
+      assertEquals(List.of("Use 2 clusters: binaries 3,360 → 260"), actions.stream().map(CodeAction::getTitle).toList());
+      TextEdit edit = actions.get(0).getEdit().getChanges().get(uri).get(0);
+      String changed = text.substring(0, Marked.offset(text, edit.getRange().getStart())) + edit.getNewText()
+          + text.substring(Marked.offset(text, edit.getRange().getEnd()));
+      assertTrue(changed.contains("  horizon 60\n  clusters 2 ordered\n}"), changed);
+      h.change(uri, 2, changed);
+      assertEquals(List.of(), h.diagnostics(uri, 2).getDiagnostics());
+      List<InlayHint> after = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(Harness.doc(uri), all))
+          .get(5, TimeUnit.SECONDS);
+      assertEquals(List.of("binaries 3,360 · continuous 1,200 · rows 4,000",
+          "with 2 clusters, ordered: binaries 260 · continuous 1,300 · rows 4,200"),
+          after.stream().map(x -> x.getLabel().getLeft()).toList());
+    }
+  }
+
+  private static List<CodeAction> actions(Harness h, String uri, String text) throws Exception {
+    Range all = new Range(Marked.position(text, 0), Marked.position(text, text.length()));
+    return h.remote.getTextDocumentService().codeAction(new CodeActionParams(Harness.doc(uri), all,
+        new CodeActionContext(List.of()))).get(5, TimeUnit.SECONDS).stream().map(e -> e.getRight()).toList();
+  }
+}
