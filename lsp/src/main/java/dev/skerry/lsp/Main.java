@@ -26,7 +26,7 @@ public final class Main {
     SkerryLanguageServer server = new SkerryLanguageServer(DEBOUNCE, code -> {
       out.flush();
       System.exit(code);
-    });
+    }, new dev.skerry.lsp.analysis.AnalysisSizes());
     Launcher<LanguageClient> launcher = LSPLauncher.createServerLauncher(server, in, out);
     server.connect(launcher.getRemoteProxy());
     try {

@@ -87,4 +87,23 @@ class SizesTest {
     return h.remote.getTextDocumentService().codeAction(new CodeActionParams(Harness.doc(uri), all,
         new CodeActionContext(List.of()))).get(5, TimeUnit.SECONDS).stream().map(e -> e.getRight()).toList();
   }
+
+  /** With the real analysis wired in (as Main does), the hint shows exactly what `skerry check` predicts. */
+  @Test
+  void theRealAnalysisAgreesWithTheCompiler() throws Exception {
+    String text = Marked.parse(NavigationAndHoverTest.SCENARIO).text();
+    try (Harness h = new Harness(dir, Duration.ofMillis(20), new dev.skerry.lsp.analysis.AnalysisSizes())) {
+      String uri = h.open("bay.skerry", text);
+      Range all = new Range(Marked.position(text, 0), Marked.position(text, text.length()));
+      List<InlayHint> hints = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(Harness.doc(uri), all))
+          .get(5, TimeUnit.SECONDS);
+      var checked = dev.skerry.compiler.check.ScenarioChecker.check(
+          dev.skerry.compiler.source.SourceFile.of(dir.resolve("bay.skerry"), text),
+          new dev.skerry.compiler.check.DiskLoader(dir));
+      var sizes = dev.skerry.compiler.analysis.Analysis.sizes(checked.scenario());
+      String expected = String.format(java.util.Locale.ROOT, "binaries %,d · continuous %,d · rows %,d",
+          sizes.binaries(), sizes.continuous(), sizes.rows());
+      assertEquals(expected, hints.get(0).getLabel().getLeft());
+    }
+  }
 }
