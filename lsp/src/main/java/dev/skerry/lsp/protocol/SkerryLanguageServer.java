@@ -76,6 +76,7 @@ public final class SkerryLanguageServer implements LanguageServer, LanguageClien
     caps.setRenameProvider(new RenameOptions(true));
     caps.setDocumentSymbolProvider(true);
     caps.setFoldingRangeProvider(true);
+    caps.setDocumentFormattingProvider(true);
     caps.setCompletionProvider(new CompletionOptions(false, List.of()));
     caps.setCodeActionProvider(new CodeActionOptions(sizes ? List.of(CodeActionKind.QuickFix,
         CodeActionKind.RefactorRewrite) : List.of(CodeActionKind.QuickFix)));

@@ -32,6 +32,8 @@ import org.eclipse.lsp4j.DidSaveTextDocumentParams;
 import org.eclipse.lsp4j.DocumentSymbol;
 import org.eclipse.lsp4j.DocumentSymbolParams;
 import org.eclipse.lsp4j.FoldingRange;
+import org.eclipse.lsp4j.TextEdit;
+import org.eclipse.lsp4j.DocumentFormattingParams;
 import org.eclipse.lsp4j.FoldingRangeRequestParams;
 import org.eclipse.lsp4j.Hover;
 import org.eclipse.lsp4j.InlayHint;
@@ -78,6 +80,8 @@ final class TextDocuments implements TextDocumentService {
   private final CodeActionHandler codeActions;
   private final SizeHandler sizes = new SizeHandler();
   private final SemanticTokensHandler semanticTokens = new SemanticTokensHandler();
+  private final dev.skerry.lsp.protocol.feature.FormattingHandler formatter =
+      new dev.skerry.lsp.protocol.feature.FormattingHandler();
 
   TextDocuments(DocumentStore store, AnalysisScheduler scheduler, Locations locations, DiagnosticConverter converter,
       Consumer<String> onClose) {
@@ -202,6 +206,17 @@ final class TextDocuments implements TextDocumentService {
   @Override
   public CompletableFuture<List<FoldingRange>> foldingRange(FoldingRangeRequestParams params) {
     return withAnalysis(params == null ? null : params.getTextDocument(), outline::folding);
+  }
+
+  /** Formatting answers from the latest text with the compiler's canonical formatter. */
+  @Override
+  public CompletableFuture<List<? extends TextEdit>> formatting(DocumentFormattingParams params) {
+    TextDocumentIdentifier id = params == null ? null : params.getTextDocument();
+    Document document = id == null ? null : store.get(id.getUri());
+    if (document == null) {
+      return CompletableFuture.completedFuture(List.of());
+    }
+    return CompletableFuture.supplyAsync(() -> formatter.format(document), requests);
   }
 
   /** Completion answers from the latest text at once, with names from the newest analysis available. */
