@@ -77,6 +77,8 @@ public final class SkerryLanguageServer implements LanguageServer, LanguageClien
     caps.setDocumentSymbolProvider(true);
     caps.setFoldingRangeProvider(true);
     caps.setDocumentFormattingProvider(true);
+    caps.setExecuteCommandProvider(new org.eclipse.lsp4j.ExecuteCommandOptions(
+        java.util.List.of(Workspace.EXPORT_MPS, Workspace.EXPORT_LP)));
     caps.setCompletionProvider(new CompletionOptions(false, List.of()));
     caps.setCodeActionProvider(new CodeActionOptions(sizes ? List.of(CodeActionKind.QuickFix,
         CodeActionKind.RefactorRewrite) : List.of(CodeActionKind.QuickFix)));
