@@ -3,6 +3,9 @@ package dev.skerry.compiler.bench;
 import dev.skerry.compiler.analysis.Analysis;
 import dev.skerry.compiler.analysis.FormulationLayout;
 import dev.skerry.compiler.analysis.Sizes;
+import dev.skerry.compiler.io.ModelFiles;
+import dev.skerry.compiler.io.ModelFormat;
+import dev.skerry.compiler.io.MpsWriter;
 import dev.skerry.compiler.lower.Lowering;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.model.Area;
@@ -14,9 +17,12 @@ import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
 import dev.skerry.compiler.model.Zone;
+import java.io.Writer;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -24,35 +30,27 @@ import java.util.Locale;
 import java.util.Random;
 
 /**
- * Lowering benchmark (a main class, not a test): generated scenarios with 10 to 2,000 box zones
- * and 10 to 50 steps, pruned and plain. Prints per case the analysis time, the lowering wall time
- * (layout + MILP, best of at least {@value #REPEATS} runs, more for fast cases, after a warm-up),
- * peak heap during one lowering, non-zeros per second, and at the end the log-log slope of
- * lowering time against NS·NO.
+ * Lowering and writing benchmark (a main class, not a test): generated scenarios with 10 to 2,000
+ * box zones and 10 to 50 steps, pruned and plain. Per case it prints the analysis time, the
+ * lowering wall time (layout + MILP), the time to stream the free MPS into a writer that only
+ * counts characters, and the time to write it to a real temporary file through {@link ModelFiles}
+ * (temporary file and move, as {@code skerry build} does); each the best of at least {@value
+ * #REPEATS} runs, more for fast cases, after a warm-up. Then the peak heap while one lowering and
+ * one file write run, the CPU time of the JVM over analysis, lowering and both writes (which tells
+ * work from waiting on a loaded machine), millions of non-zeros per second for lowering and for writing, and at the end
+ * the log-log slopes of the times against NS·NO (plain cases) and against the non-zeros. Output is a Markdown table, as pasted into
+ * BENCHMARKS.md.
  *
- * <p>Run: {@code mvn -q -B install -DskipTests -pl grammar,compiler -am && mvn -q -B test-compile
- * -pl compiler && java -Xmx4g -cp compiler/target/classes:compiler/target/test-classes:$(cat
- * compiler/target/runtime-classpath.txt) dev.skerry.compiler.bench.LoweringBench [quick]} (add {@code -Xms1g
- * -XX:+UseSerialGC} on a loaded 2-core machine: G1 young pauses there dominate the timings)
+ * <p>Run: {@code mvn -q -B install -DskipTests -pl grammar,compiler && mvn -q -B test-compile -pl
+ * compiler && java -Xmx1g -Xms1g -XX:+UseSerialGC -cp
+ * compiler/target/classes:compiler/target/test-classes:$(cat compiler/target/runtime-classpath.txt)
+ * dev.skerry.compiler.bench.LoweringBench [quick]} ({@code -Xmx1g} shows that the largest case fits
+ * in 1 GB of heap; the serial collector because G1's young pauses dominate on a loaded 2-core
+ * machine)
  */
 public final class LoweringBench {
   private static final int REPEATS = 3;
   private static final int MAX_REPEATS = 50;
-
-  /**
-   * Work done on the lowered model after lowering, timed per case. Empty for now; the MPS writer
-   * from the io branch goes here, e.g. {@code new Stage("mps", m -> MpsWriter.write(m, sink))}.
-   */
-  private static final List<Stage> AFTER_LOWERING = List.of();
-
-  /** A timed step applied to each lowered model. */
-  public record Stage(String name, StageAction action) {}
-
-  /** What a stage does with a model. */
-  @FunctionalInterface
-  public interface StageAction {
-    void run(Milp milp) throws Exception;
-  }
 
   private LoweringBench() {}
 
@@ -60,59 +58,137 @@ public final class LoweringBench {
     boolean quick = args.length > 0 && args[0].equals("quick");
     int[] zoneCounts = quick ? new int[] {10, 100, 500} : new int[] {10, 50, 200, 500, 1000, 2000};
     int[] horizons = quick ? new int[] {10, 25} : new int[] {10, 25, 50};
-    System.out.printf(Locale.ROOT, "%-6s %-4s %-7s %10s %10s %10s %9s %10s %9s %9s %12s%s%n", "zones", "N",
-        "pruning", "binaries", "rows", "nonzeros", "analyse", "lower", "peakMB", "Mnz/s", "NS*NO", stageHeader());
+    Path folder = Files.createTempDirectory("skerry-bench");
+    Path file = folder.resolve("bench.mps");
+    System.out.println("| zones | N | pruning | binaries | rows | non-zeros | analyse s | lower s | lower Mnz/s"
+        + " | write (counted) s | write Mnz/s | write (file) s | file MB | CPU s, all four | peak heap MB |");
+    System.out.println("|---:|---:|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|");
     for (int i = 0; i < 20; i++) {
-      Lowering.lower(generate(200, 25, i % 2 == 0, i));
+      Milp warm = Lowering.lower(generate(200, 25, i % 2 == 0, i));
+      MpsWriter.free().write(warm, new CountingWriter());
     }
-    List<double[]> plain = new ArrayList<>();
-    List<double[]> pruned = new ArrayList<>();
+    List<double[]> lowerPoints = new ArrayList<>();
+    List<double[]> writePoints = new ArrayList<>();
+    List<double[]> totalPoints = new ArrayList<>();
+    List<double[]> bigPoints = new ArrayList<>();
+    double slowestLowerRate = Double.POSITIVE_INFINITY;
+    double slowestWriteRate = Double.POSITIVE_INFINITY;
     for (int no : zoneCounts) {
       for (int n : horizons) {
         for (boolean pruning : new boolean[] {false, true}) {
           Scenario s = generate(no, n, pruning, 42L + no);
           double analyse = Double.POSITIVE_INFINITY;
           double lower = Double.POSITIVE_INFINITY;
+          double counted = Double.POSITIVE_INFINITY;
+          double written = Double.POSITIVE_INFINITY;
+          double cpu = Double.POSITIVE_INFINITY;
           Milp milp = null;
           Sizes sizes = null;
+          long chars = 0;
           long started = System.nanoTime();
           for (int rep = 0; rep < MAX_REPEATS && (rep < REPEATS || System.nanoTime() - started < 1e9); rep++) {
             milp = null;
+            long c0 = processCpuNanos();
             long t0 = System.nanoTime();
             sizes = Analysis.sizes(s);
             long t1 = System.nanoTime();
             milp = Lowering.lower(FormulationLayout.of(s)).milp();
             long t2 = System.nanoTime();
+            CountingWriter sink = new CountingWriter();
+            MpsWriter.free().write(milp, sink);
+            long t3 = System.nanoTime();
+            ModelFiles.write(milp, file, ModelFormat.MPS);
+            long t4 = System.nanoTime();
+            cpu = Math.min(cpu, (processCpuNanos() - c0) / 1e9);
+            chars = sink.chars;
             analyse = Math.min(analyse, (t1 - t0) / 1e9);
             lower = Math.min(lower, (t2 - t1) / 1e9);
+            counted = Math.min(counted, (t3 - t2) / 1e9);
+            written = Math.min(written, (t4 - t3) / 1e9);
           }
+          long nonZeros = milp.nonZeros();
+          long rows = milp.rowCount();
           milp = null;
-          double peak = peakHeapDuring(() -> Lowering.lower(s));
-          milp = Lowering.lower(s);
-          StringBuilder stages = new StringBuilder();
-          for (Stage st : AFTER_LOWERING) {
-            long t0 = System.nanoTime();
-            st.action().run(milp);
-            stages.append(String.format(Locale.ROOT, " %9.3f", (System.nanoTime() - t0) / 1e9));
-          }
+          double peak = peakHeapDuring(() -> {
+            Milp m = Lowering.lower(s);
+            ModelFiles.write(m, file, ModelFormat.MPS);
+          });
           long nsno = (long) n * no;
-          System.out.printf(Locale.ROOT, "%-6d %-4d %-7s %10d %10d %10d %9.3f %10.3f %9.1f %9.2f %12d%s%n", no, n,
-              pruning ? "on" : "off", sizes.binaries(), milp.rowCount(), milp.nonZeros(), analyse, lower,
-              peak / 1e6, milp.nonZeros() / lower / 1e6, nsno, stages);
-          (pruning ? pruned : plain).add(new double[] {Math.log(nsno), Math.log(lower)});
+          double lowerRate = nonZeros / lower / 1e6;
+          double writeRate = nonZeros / counted / 1e6;
+          slowestLowerRate = Math.min(slowestLowerRate, lowerRate);
+          slowestWriteRate = Math.min(slowestWriteRate, writeRate);
+          System.out.printf(Locale.ROOT, "| %d | %d | %s | %d | %d | %d | %.3f | %.3f | %.2f | %.3f | %.2f | %.3f | %.1f | %.3f | %.0f |%n",
+              no, n, pruning ? "on" : "off", sizes.binaries(), rows, nonZeros, analyse, lower, lowerRate, counted,
+              writeRate, written, chars / 1e6, cpu, peak / 1e6);
+          if (!pruning) {
+            lowerPoints.add(new double[] {Math.log(nsno), Math.log(lower)});
+            writePoints.add(new double[] {Math.log(nsno), Math.log(counted)});
+            totalPoints.add(new double[] {Math.log(nsno), Math.log(lower + written)});
+          }
+          if (nonZeros >= 100_000) {
+            bigPoints.add(new double[] {Math.log(nonZeros), Math.log(lower + written)});
+          }
         }
       }
     }
-    System.out.printf(Locale.ROOT, "log-log slope of lowering time vs NS*NO: plain %.2f, pruned %.2f%n",
-        slope(plain), slope(pruned));
+    Files.deleteIfExists(file);
+    Files.deleteIfExists(folder);
+    // Pruned models do not grow with NS·NO (pruning drops most zones), so the slope against NS·NO
+    // is taken over the plain cases, whose size is proportional to it; and, over every case of at
+    // least 100,000 non-zeros, the slope of lowering + file write against the non-zeros.
+    System.out.printf(Locale.ROOT, "%nlog-log slope vs NS*NO (pruning off): lowering %.2f, writing %.2f,"
+        + " lowering + file write %.2f%n", slope(lowerPoints), slope(writePoints), slope(totalPoints));
+    System.out.printf(Locale.ROOT, "log-log slope of lowering + file write vs non-zeros (cases >= 100k): %.2f%n",
+        slope(bigPoints));
+    System.out.printf(Locale.ROOT, "slowest rate: lowering %.2f M non-zeros/s, writing %.2f M non-zeros/s%n",
+        slowestLowerRate, slowestWriteRate);
+    System.out.printf(Locale.ROOT, "heap limit %.0f MB%n", Runtime.getRuntime().maxMemory() / 1e6);
   }
 
-  private static String stageHeader() {
-    StringBuilder sb = new StringBuilder();
-    for (Stage s : AFTER_LOWERING) {
-      sb.append(String.format(Locale.ROOT, " %9s", s.name()));
+  /**
+   * CPU time of the whole JVM (collector and compiler included), to tell work from waiting for a
+   * core on a loaded machine; -1 where the platform does not say.
+   */
+  private static long processCpuNanos() {
+    java.lang.management.OperatingSystemMXBean os = ManagementFactory.getOperatingSystemMXBean();
+    if (os instanceof com.sun.management.OperatingSystemMXBean sun) {
+      return sun.getProcessCpuTime();
     }
-    return sb.toString();
+    return -1;
+  }
+
+  /** A writer that only counts what it is given. */
+  static final class CountingWriter extends Writer {
+    long chars;
+
+    @Override
+    public void write(char[] buffer, int offset, int length) {
+      chars += length;
+    }
+
+    @Override
+    public void write(String text, int offset, int length) {
+      chars += length;
+    }
+
+    @Override
+    public Writer append(CharSequence text) {
+      chars += text.length();
+      return this;
+    }
+
+    @Override
+    public void flush() {}
+
+    @Override
+    public void close() {}
+  }
+
+  /** Work whose peak heap is measured. */
+  @FunctionalInterface
+  interface Work {
+    void run() throws Exception;
   }
 
   /**
@@ -142,7 +218,7 @@ public final class LoweringBench {
   }
 
   /** Peak heap in bytes while {@code work} runs, from the heap pools' peak counters. */
-  private static double peakHeapDuring(Runnable work) {
+  private static double peakHeapDuring(Work work) throws Exception {
     System.gc();
     long base = 0;
     for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {

@@ -58,6 +58,15 @@ public final class OutsideSolvers {
    * extension).
    */
   public static Result cbcObjective(Path model) throws IOException, InterruptedException {
+    return cbcObjective(model, TIMEOUT_SECONDS);
+  }
+
+  /**
+   * As {@link #cbcObjective(Path)}, but the process is ended after {@code timeoutSeconds} (for the
+   * opt-in solves of the larger examples); a solve ended so has no solution file and says FAILED.
+   */
+  public static Result cbcObjective(Path model, long timeoutSeconds)
+      throws IOException, InterruptedException {
     Path cbc = require("cbc", "coinor-cbc");
     Path work = Files.createTempDirectory("skerry-cbc");
     try {
@@ -74,7 +83,8 @@ public final class OutsideSolvers {
                   "-printingOptions",
                   "all",
                   "-solu",
-                  solution.toString()));
+                  solution.toString()),
+              timeoutSeconds);
       if (!Files.exists(solution)) {
         return new Result("cbc", Status.FAILED, Double.NaN, tail(log));
       }
@@ -119,7 +129,7 @@ public final class OutsideSolvers {
       if (maximize) {
         command.add("--max");
       }
-      String log = run(work, command);
+      String log = run(work, command, TIMEOUT_SECONDS);
       if (!Files.exists(solution)) {
         return new Result("glpsol", Status.FAILED, Double.NaN, tail(log));
       }
@@ -213,7 +223,7 @@ public final class OutsideSolvers {
             + ")");
   }
 
-  private static String run(Path work, List<String> command)
+  private static String run(Path work, List<String> command, long timeoutSeconds)
       throws IOException, InterruptedException {
     Path log = work.resolve("log.txt");
     Process process =
@@ -222,10 +232,10 @@ public final class OutsideSolvers {
             .redirectErrorStream(true)
             .redirectOutput(log.toFile())
             .start();
-    if (!process.waitFor(TIMEOUT_SECONDS, TimeUnit.SECONDS)) {
+    if (!process.waitFor(timeoutSeconds, TimeUnit.SECONDS)) {
       process.destroyForcibly();
       process.waitFor();
-      return "timed out after " + TIMEOUT_SECONDS + " s: " + String.join(" ", command);
+      return "timed out after " + timeoutSeconds + " s: " + String.join(" ", command);
     }
     return Files.readString(log, StandardCharsets.ISO_8859_1);
   }
