@@ -37,6 +37,7 @@ public final class ModelFiles {
     Path folder = absolute.getParent();
     Path mapFile = absolute.resolveSibling(absolute.getFileName() + NAME_MAP_SUFFIX);
     Path temporary = Files.createTempFile(folder, "." + absolute.getFileName(), ".part");
+    dev.skerry.compiler.report.AtomicFiles.readableByAll(temporary);
     Path mapTemporary = null;
     try {
       WriteSummary summary;
@@ -45,6 +46,7 @@ public final class ModelFiles {
       }
       if (!summary.names().isEmpty()) {
         mapTemporary = Files.createTempFile(folder, "." + mapFile.getFileName(), ".part");
+        dev.skerry.compiler.report.AtomicFiles.readableByAll(mapTemporary);
         summary.names().writeTo(mapTemporary);
         moveInto(mapTemporary, mapFile);
         mapTemporary = null;
