@@ -161,10 +161,12 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
   /**
    * Cluster box l: faces in the order of {@link Shape.Box#faces()} (x ≤ xmin side, x ≥ xmax, y ≤
    * ymin, y ≥ ymax), each separating when {@code n·p − n_a·bound ≥ 0} (n_a the normal's only non-zero
-   * component). M covers every position of the domain box and every bound value of the world box.
+   * component). M covers every position of the domain box and every value of the bound's range
+   * ({@link ClusterLayout#sides}).
    */
-  static Obstacle cluster(int l, String tag, Bounds world, FormulationLayout.Domains d, ArrivalLayout arrival) {
-    List<Shape.Face> faces = new Shape.Box(world).faces();
+  static Obstacle cluster(int l, String tag, List<ClusterLayout.Range> sides, FormulationLayout.Domains d,
+      ArrivalLayout arrival) {
+    List<Shape.Face> faces = new Shape.Box(new Bounds(0, 0, 1, 1)).faces();
     List<Slot> slots = new ArrayList<>();
     for (int s = firstSlot(d.guard()); s <= lastSlot(d.guard(), d.horizon()); s++) {
       int[] pts = points(s, d.guard());
@@ -172,9 +174,8 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
       for (int j = 0; j < 4; j++) {
         Vec2 n = faces.get(j).normal();
         double axis = n.x() + n.y();
-        double lo = j < 2 ? world.xmin() : world.ymin();
-        double hi = j < 2 ? world.xmax() : world.ymax();
-        double boundMax = axis > 0 ? hi : -lo;
+        ClusterLayout.Range range = sides.get(j);
+        double boundMax = axis > 0 ? range.hi() : -range.lo();
         double[] m = new double[pts.length];
         for (int i = 0; i < pts.length; i++) {
           m[i] = BigM.pad(boundMax - Geometry.minOver(d.position(pts[i]), n));

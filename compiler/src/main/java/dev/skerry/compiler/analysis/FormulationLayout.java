@@ -80,7 +80,7 @@ public record FormulationLayout(
       }
       clusters = ClusterLayout.of(s.plan().clusters(), s.plan().symmetry(), world, boxes, tags, zoneNames);
       for (int l = 0; l < s.plan().clusters(); l++) {
-        obstacles.add(AvoidanceLayout.cluster(l, "c" + l, world, d, arrival));
+        obstacles.add(AvoidanceLayout.cluster(l, "c" + l, clusters.sides(), d, arrival));
       }
     } else {
       for (Zone z : s.zones()) {

@@ -23,14 +23,14 @@ final class ClusterLowering {
     if (cl == null) {
       return;
     }
-    Bounds w = cl.world();
     c.clusterBounds = new Variable[cl.count()][4];
     for (int l = 0; l < cl.count(); l++) {
       String e = "c" + l;
-      c.clusterBounds[l][0] = c.builder.newContinuous("cxmin_" + e, w.xmin(), w.xmax(), Origin.of(e, "cluster-bound"));
-      c.clusterBounds[l][1] = c.builder.newContinuous("cxmax_" + e, w.xmin(), w.xmax(), Origin.of(e, "cluster-bound"));
-      c.clusterBounds[l][2] = c.builder.newContinuous("cymin_" + e, w.ymin(), w.ymax(), Origin.of(e, "cluster-bound"));
-      c.clusterBounds[l][3] = c.builder.newContinuous("cymax_" + e, w.ymin(), w.ymax(), Origin.of(e, "cluster-bound"));
+      for (int side = 0; side < 4; side++) {
+        ClusterLayout.Range r = cl.sides().get(side);
+        c.clusterBounds[l][side] = c.builder.newContinuous("c" + SIDES[side] + "_" + e, r.lo(), r.hi(),
+            Origin.of(e, "cluster-bound"));
+      }
     }
     Variable[][] a = new Variable[cl.zoneCount()][cl.count()];
     LinearExpr[] once = new LinearExpr[cl.zoneCount()];
@@ -63,20 +63,14 @@ final class ClusterLowering {
   private static void symmetry(LoweringContext c, ClusterLayout cl, Variable[][] a) {
     if (cl.rule() == SymmetryRule.ORDERED) {
       for (int l = 1; l < cl.count(); l++) {
-        int m = cl.eligible(l);
-        if (m == 0) {
-          continue;
-        }
-        LinearExpr e = new LinearExpr();
-        for (int o = 0; o < cl.zoneCount(); o++) {
-          if (a[o][l] != null) {
-            e.add(a[o][l]);
+        for (int o = l; o < cl.zoneCount(); o++) {
+          LinearExpr e = LinearExpr.of(a[o][l]);
+          for (int below = l - 1; below < o; below++) {
+            e.add(a[below][l - 1], -1);
           }
-          if (a[o][l - 1] != null) {
-            e.add(a[o][l - 1], -m);
-          }
+          c.builder.addLessOrEqual("symopen_" + cl.zoneTags().get(o) + "_c" + l, e, 0,
+              Origin.of(cl.zoneNames().get(o), "symmetry"));
         }
-        c.builder.addLessOrEqual("symuse_c" + l, e, 0, Origin.of("c" + l, "symmetry"));
       }
     } else if (cl.rule() == SymmetryRule.SORTED) {
       for (int l = 0; l + 1 < cl.count(); l++) {

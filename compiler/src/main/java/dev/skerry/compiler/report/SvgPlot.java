@@ -10,13 +10,17 @@ import dev.skerry.compiler.model.Zone;
 import dev.skerry.compiler.plan.ClusterBox;
 import dev.skerry.compiler.plan.Sample;
 import dev.skerry.compiler.plan.Trajectory;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 
 /**
  * A plan view of a scenario and its plan as a standalone SVG: keep-in area, zones as written and
  * grown by the radius, target and waypoints, clusters, the path with a marker per step, start and
- * arrival, axes in metres, a scale bar, a legend and the safety caution.
+ * arrival, axes in metres, a scale bar, a legend and the safety caution. Each used cluster has its
+ * own hue: its dashed box and a tint over every zone it holds; an unused cluster (no zones, a
+ * collapsed box) is not drawn.
  */
 public final class SvgPlot {
   private static final int WIDTH = 900;
@@ -29,6 +33,9 @@ public final class SvgPlot {
   private static final String PATH = "#d1495b";
   private static final String TARGET = "#2a9d8f";
   private static final String CLUSTER = "#5c6bc0";
+  /** One hue per cluster, repeated past the eighth; chosen to stay apart from the path and target. */
+  private static final List<String> CLUSTER_HUES = List.of("#5c6bc0", "#e09f3e", "#6a994e", "#9d4edd", "#00838f",
+      "#c1666b", "#7d6b2f", "#3d5a80");
 
   private final Scenario s;
   private final double scale;
@@ -65,6 +72,10 @@ public final class SvgPlot {
     return MARGIN + (view.ymax() - wy) * scale;
   }
 
+  private static String hue(int cluster) {
+    return CLUSTER_HUES.get(cluster % CLUSTER_HUES.size());
+  }
+
   private static String f(double v) {
     return String.format(Locale.ROOT, "%.2f", v);
   }
@@ -85,25 +96,40 @@ public final class SvgPlot {
     out.append("<g id=\"area\">").append(shape(s.area().shape(), WATER, INK, "1.5", null)).append("</g>\n");
     axes();
     double r = s.vehicle().radius();
+    List<ClusterBox> used = clusters.stream().filter(c -> !c.zones().isEmpty()).toList();
+    Map<String, Integer> member = new HashMap<>();
+    for (int i = 0; i < used.size(); i++) {
+      for (String zone : used.get(i).zones()) {
+        member.put(zone, i);
+      }
+    }
     out.append("<g id=\"zones\">\n");
     for (Zone z : s.zones()) {
       if (r > 0) {
         out.append(shape(z.shape().inflate(r), "none", GROWN, "1", "4 3"));
       }
       out.append(shape(z.shape(), ZONE, ZONE, "1", null));
+      Integer in = member.get(z.name());
+      if (in != null) {
+        String hue = hue(in);
+        out.append(shape(z.shape(), hue, hue, "2", null).replace("<polygon ", "<polygon class=\"cluster-member\" data-cluster=\""
+            + esc(used.get(in).name()) + "\" fill-opacity=\"0.55\" "));
+      }
       Bounds zb = z.shape().bounds();
       out.append("<text class=\"zone-label\" x=\"").append(f(x(zb.center().x()))).append("\" y=\"")
           .append(f(y(zb.ymax() + r) - 3)).append("\" font-size=\"9\" fill=\"").append(ZONE)
           .append("\" text-anchor=\"middle\">").append(esc(z.name())).append("</text>\n");
     }
     out.append("</g>\n");
-    if (!clusters.isEmpty()) {
+    if (!used.isEmpty()) {
       out.append("<g id=\"clusters\">\n");
-      for (ClusterBox c : clusters) {
-        out.append(shape(new Shape.Box(c.box()), CLUSTER, CLUSTER, "1.5", "8 4").replace("fill=\"" + CLUSTER + "\"",
-            "fill=\"" + CLUSTER + "\" fill-opacity=\"0.12\""));
+      for (int i = 0; i < used.size(); i++) {
+        ClusterBox c = used.get(i);
+        String hue = hue(i);
+        out.append(shape(new Shape.Box(c.box()), hue, hue, "1.5", "8 4").replace("fill=\"" + hue + "\"",
+            "fill=\"" + hue + "\" fill-opacity=\"0.10\""));
         out.append("<text x=\"").append(f(x(c.box().xmin()) + 3)).append("\" y=\"").append(f(y(c.box().ymax()) - 4))
-            .append("\" font-size=\"10\" fill=\"").append(CLUSTER).append("\">").append(esc(c.name() + " (" + c.zones().size()
+            .append("\" font-size=\"10\" fill=\"").append(hue).append("\">").append(esc(c.name() + " (" + c.zones().size()
                 + " zones)")).append("</text>\n");
       }
       out.append("</g>\n");
@@ -129,7 +155,7 @@ public final class SvgPlot {
     out.append("<circle id=\"start\" cx=\"").append(f(x(start.x()))).append("\" cy=\"").append(f(y(start.y())))
         .append("\" r=\"5\" fill=\"white\" stroke=\"").append(INK).append("\" stroke-width=\"2\"/>\n");
     scaleBar();
-    legend(path != null, !clusters.isEmpty(), predicted != null);
+    legend(path != null, !used.isEmpty(), predicted != null);
     out.append("<text x=\"").append(MARGIN).append("\" y=\"").append(height - 12).append("\" font-size=\"10\" fill=\"#555\">")
         .append("Planning aid, not certified guidance: check local aviation or maritime rules and licensed practice; ")
         .append("the radius margin is the user's choice.</text>\n");
@@ -236,7 +262,7 @@ public final class SvgPlot {
     }
     if (hasClusters) {
       ly = legendRow(lx, ly, "<rect width=\"14\" height=\"10\" fill=\"" + CLUSTER + "\" fill-opacity=\"0.12\" stroke=\""
-          + CLUSTER + "\" stroke-dasharray=\"8 4\"/>", "cluster");
+          + CLUSTER + "\" stroke-dasharray=\"8 4\"/>", "cluster, its zones tinted");
     }
     if (hasPath) {
       ly = legendRow(lx, ly, "<line x1=\"0\" y1=\"5\" x2=\"14\" y2=\"5\" stroke=\"" + PATH + "\" stroke-width=\"2\"/>",

@@ -8,6 +8,7 @@ import dev.skerry.compiler.analysis.RandomScenarios;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.Row;
 import dev.skerry.compiler.milp.Variable;
+import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
 import dev.skerry.compiler.model.Scenario;
 import java.util.regex.Pattern;
 import net.jqwik.api.ForAll;
@@ -30,6 +31,18 @@ class SizesAgreementProperties {
       for (Row r : m.rows()) {
         assertTrue(NAME.matcher(r.name()).matches(), "bad row name " + r.name());
       }
+    }
+  }
+
+  /** Clustered variants of random scenarios: 1 to 4 clusters under every symmetry rule. */
+  @Property(tries = 40)
+  void predictedEqualsLoweredForEveryClusterRule(@ForAll long seed) {
+    Scenario s = RandomScenarios.of(seed);
+    int count = 1 + (int) Math.floorMod(seed, 4L);
+    for (SymmetryRule rule : SymmetryRule.values()) {
+      Scenario variant = s.withPlan(s.plan().withClusters(count, rule));
+      assertEquals(Census.of(Lowering.lower(variant), variant), Analysis.sizes(variant),
+          "seed " + seed + " clusters " + count + " " + rule.keyword());
     }
   }
 

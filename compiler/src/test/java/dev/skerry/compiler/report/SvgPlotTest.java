@@ -68,4 +68,32 @@ class SvgPlotTest {
     }
     assertTrue(bytes.length > 1000 && bytes[1] == 'P' && bytes[2] == 'N' && bytes[3] == 'G', "not a PNG");
   }
+
+  @Test
+  void eachUsedClusterTintsItsOwnZonesAndAnUnusedOneIsNotDrawn() throws Exception {
+    Scenario s = harbour();
+    List<ClusterBox> clusters = List.of(
+        new ClusterBox("c1", new Bounds(29, -1, 63, 41), List.of("stone_pier", "shoal")),
+        new ClusterBox("c2", new Bounds(63, 41, 71, 71), List.of("fuel_jetty")),
+        new ClusterBox("c3", new Bounds(64, 42, 36, 28), List.of()));
+    String svg = SvgPlot.render(s, null, clusters, "tinted");
+    Document doc = DocumentBuilderFactory.newInstance().newDocumentBuilder()
+        .parse(new ByteArrayInputStream(svg.getBytes(StandardCharsets.UTF_8)));
+    org.w3c.dom.NodeList polygons = doc.getElementsByTagName("polygon");
+    java.util.Map<String, String> tint = new java.util.HashMap<>();
+    for (int i = 0; i < polygons.getLength(); i++) {
+      org.w3c.dom.Element e = (org.w3c.dom.Element) polygons.item(i);
+      if (e.getAttribute("class").equals("cluster-member")) {
+        tint.merge(e.getAttribute("data-cluster"), e.getAttribute("fill"), (a, b) -> {
+          assertEquals(a, b, "one hue per cluster");
+          return a;
+        });
+      }
+    }
+    assertEquals(3, svg.split("class=\"cluster-member\"", -1).length - 1, "one tint per clustered zone");
+    assertEquals(java.util.Set.of("c1", "c2"), tint.keySet());
+    assertTrue(!tint.get("c1").equals(tint.get("c2")), "two clusters, two hues: " + tint);
+    assertTrue(svg.contains("c1 (2 zones)") && svg.contains("c2 (1 zones)"));
+    assertTrue(!svg.contains("c3 ("), "the unused cluster's collapsed box is not drawn");
+  }
 }
