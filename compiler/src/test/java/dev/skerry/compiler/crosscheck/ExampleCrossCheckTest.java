@@ -43,6 +43,25 @@ class ExampleCrossCheckTest {
     crossCheck("warehouse_floor", 120);
   }
 
+  /**
+   * glpsol 5.0 (Debian glpk-utils) reads our LP file of the warehouse example (about 40 s here) and
+   * must prove the same optimum as SCIP in process; the generated cases cover every format.
+   */
+  @Test
+  void warehouseLpFileSolvedByGlpsolMatchesInProcessScip() throws Exception {
+    Path file = EXAMPLES.resolve("warehouse_floor.skerry");
+    CheckResult checked = ScenarioChecker.check(SourceFile.of(file, Files.readString(file)), new DiskLoader(EXAMPLES));
+    Milp milp = Lowering.lower(checked.scenario());
+    Path lp = folder.resolve("warehouse_floor.lp");
+    WriteSummary summary = ModelFiles.write(milp, lp, ModelFormat.LP).summary();
+    OutsideSolvers.Result glpsol = OutsideSolvers.glpsolObjective(lp, ModelFormat.LP);
+    assertEquals(OutsideSolvers.Status.OPTIMAL, glpsol.status(), "glpsol said " + glpsol.detail());
+    double outside = summary.modelObjective(glpsol.objective());
+    double inProcess = InProcess.scip(milp, SolveOptions.DEFAULT_RELATIVE_GAP).objective();
+    assertTrue(Math.abs(outside - inProcess) <= 1e-9 + 1e-6 * Math.max(Math.abs(outside), Math.abs(inProcess)),
+        "glpsol on our LP file gives " + outside + ", SCIP in process " + inProcess);
+  }
+
   @ParameterizedTest(name = "{0}")
   @ValueSource(strings = {"harbour_survey", "rock_field"})
   @EnabledIfSystemProperty(named = "skerry.slow", matches = "true")
