@@ -15,6 +15,11 @@ public final class Analysis {
     return FormulationLayout.of(s).sizes();
   }
 
+  /** Binaries each zone adds to the plan as written, by zone name (counted from the same layout). */
+  public static java.util.Map<String, Long> zoneBinaries(Scenario s) {
+    return FormulationLayout.of(s).avoidance().zoneBinaries();
+  }
+
   public static SizeReport report(Scenario s) {
     PlanOptions plan = s.plan();
     FormulationLayout written = FormulationLayout.of(s);

@@ -187,6 +187,24 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
     return new Obstacle("c" + l, tag, l, true, slots);
   }
 
+  /** Binaries each zone adds (zones avoided one by one; none when the plan clusters), by zone name. */
+  public java.util.Map<String, Long> zoneBinaries() {
+    java.util.Map<String, Long> out = new java.util.LinkedHashMap<>();
+    for (Obstacle o : obstacles) {
+      if (o.isCluster()) {
+        continue;
+      }
+      long b = 0;
+      for (Slot s : o.slots()) {
+        if (!s.hard()) {
+          b += s.faces().size();
+        }
+      }
+      out.merge(o.entity(), b, Long::sum);
+    }
+    return out;
+  }
+
   void count(Sizes.Counter c) {
     for (Obstacle o : obstacles) {
       for (Slot s : o.slots()) {

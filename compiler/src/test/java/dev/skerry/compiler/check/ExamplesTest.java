@@ -74,4 +74,17 @@ class ExamplesTest {
     assertEquals(4L * 40 * 6, w.zoneBoxBinaries());
     assertEquals(4L * 40, w.zonePolygonBinaries());
   }
+
+  /** The per-zone binaries the language server shows on hover add up to the zone binaries of the sizes. */
+  @Test
+  void perZoneBinariesAddUpToTheSizes() throws IOException {
+    for (Path p : examples()) {
+      Scenario s = check(p).scenario();
+      Scenario unclustered = s.withPlan(s.plan().withClusters(0, PlanOptions.SymmetryRule.NONE));
+      Sizes sizes = Analysis.sizes(unclustered);
+      long sum = Analysis.zoneBinaries(unclustered).values().stream().mapToLong(Long::longValue).sum();
+      assertEquals(sizes.zoneBoxBinaries() + sizes.zonePolygonBinaries(), sum, p.toString());
+      assertEquals(unclustered.zones().size(), Analysis.zoneBinaries(unclustered).size(), p.toString());
+    }
+  }
 }

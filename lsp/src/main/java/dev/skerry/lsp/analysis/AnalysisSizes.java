@@ -12,7 +12,8 @@ public final class AnalysisSizes implements SizeEstimator {
   public Optional<PlanSizes> estimate(Scenario scenario) {
     SizeReport r = Analysis.report(scenario);
     int suggested = scenario.plan().clustered() ? 0 : Analysis.SUGGESTED_CLUSTERS;
-    return Optional.of(new PlanSizes(counts(r.asWritten()), counts(r.comparison()), r.comparisonLabel(), suggested));
+    return Optional.of(new PlanSizes(counts(r.asWritten()), counts(r.comparison()), r.comparisonLabel(), suggested,
+        Analysis.zoneBinaries(scenario)));
   }
 
   private static Counts counts(Sizes s) {

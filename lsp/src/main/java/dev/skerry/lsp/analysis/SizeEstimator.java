@@ -15,7 +15,16 @@ public interface SizeEstimator {
    * The plan as written and one comparison (the unclustered plan when the plan clusters, else a
    * suggested clustering), with {@code suggestedClusters} > 0 when the comparison is a suggestion.
    */
-  record PlanSizes(Counts asWritten, Counts comparison, String comparisonLabel, int suggestedClusters) {}
+  record PlanSizes(Counts asWritten, Counts comparison, String comparisonLabel, int suggestedClusters,
+      java.util.Map<String, Long> zoneBinaries) {
+    public PlanSizes {
+      zoneBinaries = zoneBinaries == null ? java.util.Map.of() : java.util.Map.copyOf(zoneBinaries);
+    }
+
+    public PlanSizes(Counts asWritten, Counts comparison, String comparisonLabel, int suggestedClusters) {
+      this(asWritten, comparison, comparisonLabel, suggestedClusters, java.util.Map.of());
+    }
+  }
 
   record Counts(long binaries, long continuous, long rows) {}
 }

@@ -106,4 +106,23 @@ class SizesTest {
       assertEquals(expected, hints.get(0).getLabel().getLeft());
     }
   }
+
+  /** Hover on a zone tells the binaries it adds, the same count the analysis gives that zone. */
+  @Test
+  void zoneHoverShowsTheBinariesTheZoneAdds() throws Exception {
+    String text = Marked.parse(NavigationAndHoverTest.SCENARIO).text();
+    try (Harness h = new Harness(dir, Duration.ofMillis(20), new dev.skerry.lsp.analysis.AnalysisSizes())) {
+      String uri = h.open("bay.skerry", text);
+      h.diagnostics(uri, 1);
+      var checked = dev.skerry.compiler.check.ScenarioChecker.check(
+          dev.skerry.compiler.source.SourceFile.of(dir.resolve("bay.skerry"), text),
+          new dev.skerry.compiler.check.DiskLoader(dir));
+      var zone = checked.scenario().zones().get(0);
+      long expected = dev.skerry.compiler.analysis.Analysis.zoneBinaries(checked.scenario()).get(zone.name());
+      int at = text.indexOf("zone " + zone.name()) + 5;
+      String hover = h.remote.getTextDocumentService().hover(new HoverParams(Harness.doc(uri),
+          Marked.position(text, at))).get(5, TimeUnit.SECONDS).getContents().getRight().getValue();
+      assertTrue(hover.contains(String.format(java.util.Locale.ROOT, "binaries it adds: %,d", expected)), hover);
+    }
+  }
 }

@@ -39,7 +39,7 @@ public final class HoverHandler {
     if (decl == null) {
       return null;
     }
-    String text = describe(decl, result.check().scenario());
+    String text = describe(decl, result.check().scenario(), result.sizes());
     if (text != null && decl instanceof Decl.PlanDecl && result.sizes() != null) {
       text = text + "\n" + String.join("\n", SizeHandler.hoverLines(result.sizes()));
     }
@@ -55,10 +55,14 @@ public final class HoverHandler {
   }
 
   static String describe(Decl decl, Scenario scenario) {
+    return describe(decl, scenario, null);
+  }
+
+  static String describe(Decl decl, Scenario scenario, dev.skerry.lsp.analysis.SizeEstimator.PlanSizes sizes) {
     if (decl instanceof Decl.VehicleDecl v) {
       return vehicle(v, scenario);
     } else if (decl instanceof Decl.ZoneDecl z) {
-      return zone(z, scenario);
+      return zone(z, scenario, sizes);
     } else if (decl instanceof Decl.ConstDecl c) {
       return "constant `" + c.name().text() + "`\n\n```\n" + c.range().text() + "\n```";
     } else if (decl instanceof Decl.AreaDecl a) {
@@ -92,7 +96,7 @@ public final class HoverHandler {
     return String.join("\n", lines);
   }
 
-  private static String zone(Decl.ZoneDecl decl, Scenario scenario) {
+  private static String zone(Decl.ZoneDecl decl, Scenario scenario, dev.skerry.lsp.analysis.SizeEstimator.PlanSizes sizes) {
     Zone zone = scenario == null ? null
         : scenario.zones().stream().filter(z -> z.name().equals(decl.name().text())).findFirst().orElse(null);
     String kind = decl.shape() instanceof dev.skerry.compiler.ast.ShapeNode.BoxNode ? "box" : "polygon";
@@ -115,6 +119,12 @@ public final class HoverHandler {
       lines.add("- grown corners (counter-clockwise): " + String.join(" ", corners));
     }
     lines.add("- faces: " + zone.faceCount());
+    Long binaries = sizes == null ? null : sizes.zoneBinaries().get(zone.name());
+    if (binaries != null) {
+      lines.add(String.format(java.util.Locale.ROOT, "- binaries it adds: %,d (after reachability pruning)", binaries));
+    } else if (sizes != null && scenario.plan().clustered()) {
+      lines.add("- binaries it adds: none of its own; it is avoided through its cluster");
+    }
     return String.join("\n", lines);
   }
 
