@@ -66,15 +66,6 @@ public final class Hints {
     }
   }
 
-  private static List<Vec2> corners(Shape shape) {
-    if (shape instanceof Shape.Polygon p) {
-      return p.vertices();
-    }
-    Bounds b = shape.bounds();
-    return List.of(new Vec2(b.xmin(), b.ymin()), new Vec2(b.xmax(), b.ymin()), new Vec2(b.xmax(), b.ymax()),
-        new Vec2(b.xmin(), b.ymax()));
-  }
-
   private void target() {
     Vehicle v = s.vehicle();
     Target t = s.target();
@@ -85,7 +76,7 @@ public final class Hints {
     }
     for (Zone z : s.zones()) {
       Shape inflated = z.shape().inflate(v.radius());
-      if (corners(t.region()).stream().allMatch(inflated::contains)) {
+      if (t.region().corners().stream().allMatch(inflated::contains)) {
         sink.report(Code.TARGET_INSIDE_ZONE, t.range(), "target `" + t.name() + "` lies wholly inside zone `" + z.name()
             + "`" + (v.radius() > 0 ? " grown by the radius " + Format.number(v.radius()) + " m" : ""),
             related("zone `" + z.name() + "`", z.range()));
@@ -108,7 +99,7 @@ public final class Hints {
       }
       for (Zone z : s.zones()) {
         Shape inflated = z.shape().inflate(v.radius());
-        if (corners(region).stream().allMatch(inflated::contains)) {
+        if (region.corners().stream().allMatch(inflated::contains)) {
           sink.report(Code.WAYPOINT_UNREACHABLE, w.range(), "waypoint `" + w.name() + "` lies wholly inside zone `"
               + z.name() + "`", related("zone `" + z.name() + "`", z.range()));
         }
@@ -224,8 +215,8 @@ public final class Hints {
     if (a instanceof Shape.Box && b instanceof Shape.Box) {
       return a.bounds().distanceTo(b.bounds());
     }
-    List<Vec2> ca = corners(a);
-    List<Vec2> cb = corners(b);
+    List<Vec2> ca = a.corners();
+    List<Vec2> cb = b.corners();
     if (separatingAxisGap(a, b) <= 0 && separatingAxisGap(b, a) <= 0) {
       return 0;
     }
@@ -244,7 +235,7 @@ public final class Hints {
     double best = Double.NEGATIVE_INFINITY;
     for (Shape.Face f : a.faces()) {
       double minB = Double.POSITIVE_INFINITY;
-      for (Vec2 p : corners(b)) {
+      for (Vec2 p : b.corners()) {
         minB = Math.min(minB, f.normal().dot(p));
       }
       best = Math.max(best, minB - f.offset());
@@ -255,16 +246,9 @@ public final class Hints {
   private static double pointToPolygon(Vec2 p, List<Vec2> poly) {
     double best = Double.POSITIVE_INFINITY;
     for (int i = 0; i < poly.size(); i++) {
-      best = Math.min(best, pointToSegment(p, poly.get(i), poly.get((i + 1) % poly.size())));
+      best = Math.min(best, p.distanceToSegment(poly.get(i), poly.get((i + 1) % poly.size())));
     }
     return best;
-  }
-
-  static double pointToSegment(Vec2 p, Vec2 a, Vec2 b) {
-    Vec2 ab = b.minus(a);
-    double len2 = ab.dot(ab);
-    double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, p.minus(a).dot(ab) / len2));
-    return p.distanceTo(a.plus(ab.times(t)));
   }
 
   private void cornerCutting() {
@@ -295,7 +279,7 @@ public final class Hints {
     double best = Double.POSITIVE_INFINITY;
     for (Shape.Face f : shape.faces()) {
       double min = Double.POSITIVE_INFINITY;
-      for (Vec2 p : corners(shape)) {
+      for (Vec2 p : shape.corners()) {
         min = Math.min(min, f.normal().dot(p));
       }
       best = Math.min(best, f.offset() - min);

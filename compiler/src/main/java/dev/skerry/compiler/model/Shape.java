@@ -14,6 +14,16 @@ public sealed interface Shape permits Shape.Box, Shape.Polygon {
   /** The outward faces: the region is {p : n_j·p ≤ c_j for every j}. */
   List<Face> faces();
 
+  /** The corners, counter-clockwise (a box from its lower-left corner). */
+  default List<Vec2> corners() {
+    if (this instanceof Polygon p) {
+      return p.vertices();
+    }
+    Bounds b = bounds();
+    return List.of(new Vec2(b.xmin(), b.ymin()), new Vec2(b.xmax(), b.ymin()), new Vec2(b.xmax(), b.ymax()),
+        new Vec2(b.xmin(), b.ymax()));
+  }
+
   /** The region grown by {@code r} on every face (Minkowski sum with a disc, outer polygon). */
   Shape inflate(double r);
 

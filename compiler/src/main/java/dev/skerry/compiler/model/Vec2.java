@@ -32,4 +32,12 @@ public record Vec2(double x, double y) {
   public double distanceTo(Vec2 o) {
     return Math.hypot(x - o.x, y - o.y);
   }
+
+  /** Euclidean distance from this point to the segment a–b. */
+  public double distanceToSegment(Vec2 a, Vec2 b) {
+    Vec2 ab = b.minus(a);
+    double len2 = ab.dot(ab);
+    double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, minus(a).dot(ab) / len2));
+    return distanceTo(a.plus(ab.times(t)));
+  }
 }

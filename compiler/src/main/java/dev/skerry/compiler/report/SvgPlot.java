@@ -165,7 +165,7 @@ public final class SvgPlot {
 
   private String shape(Shape shape, String fill, String stroke, String width, String dash) {
     StringBuilder b = new StringBuilder("<polygon points=\"");
-    for (Vec2 p : corners(shape)) {
+    for (Vec2 p : shape.corners()) {
       b.append(f(x(p.x()))).append(',').append(f(y(p.y()))).append(' ');
     }
     b.setLength(b.length() - 1);
@@ -175,15 +175,6 @@ public final class SvgPlot {
       b.append(" stroke-dasharray=\"").append(dash).append('"');
     }
     return b.append("/>\n").toString();
-  }
-
-  private static List<Vec2> corners(Shape shape) {
-    if (shape instanceof Shape.Polygon p) {
-      return p.vertices();
-    }
-    Bounds b = shape.bounds();
-    return List.of(new Vec2(b.xmin(), b.ymin()), new Vec2(b.xmax(), b.ymin()), new Vec2(b.xmax(), b.ymax()),
-        new Vec2(b.xmin(), b.ymax()));
   }
 
   private void path(Trajectory path) {

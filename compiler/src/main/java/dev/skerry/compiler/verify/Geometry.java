@@ -8,15 +8,6 @@ import java.util.List;
 final class Geometry {
   private Geometry() {}
 
-  static List<Vec2> corners(Shape shape) {
-    if (shape instanceof Shape.Polygon p) {
-      return p.vertices();
-    }
-    var b = shape.bounds();
-    return List.of(new Vec2(b.xmin(), b.ymin()), new Vec2(b.xmax(), b.ymin()), new Vec2(b.xmax(), b.ymax()),
-        new Vec2(b.xmin(), b.ymax()));
-  }
-
   /** Does the segment a→b meet the closed convex shape? (Clips the segment against every face.) */
   static boolean segmentMeets(Vec2 a, Vec2 b, Shape shape) {
     double t0 = 0;
@@ -41,26 +32,19 @@ final class Geometry {
     return true;
   }
 
-  static double pointToSegment(Vec2 p, Vec2 a, Vec2 b) {
-    Vec2 ab = b.minus(a);
-    double len2 = ab.dot(ab);
-    double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, p.minus(a).dot(ab) / len2));
-    return p.distanceTo(a.plus(ab.times(t)));
-  }
-
   /** Euclidean distance from the segment a→b to the convex shape; 0 when they meet. */
   static double segmentDistance(Vec2 a, Vec2 b, Shape shape) {
     if (segmentMeets(a, b, shape)) {
       return 0;
     }
-    List<Vec2> cs = corners(shape);
+    List<Vec2> cs = shape.corners();
     double best = Double.POSITIVE_INFINITY;
     for (int i = 0; i < cs.size(); i++) {
       Vec2 c = cs.get(i);
       Vec2 e = cs.get((i + 1) % cs.size());
-      best = Math.min(best, pointToSegment(a, c, e));
-      best = Math.min(best, pointToSegment(b, c, e));
-      best = Math.min(best, pointToSegment(c, a, b));
+      best = Math.min(best, a.distanceToSegment(c, e));
+      best = Math.min(best, b.distanceToSegment(c, e));
+      best = Math.min(best, c.distanceToSegment(a, b));
     }
     return best;
   }
