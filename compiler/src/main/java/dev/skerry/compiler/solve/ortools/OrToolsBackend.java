@@ -60,6 +60,11 @@ public final class OrToolsBackend implements SolverBackend {
     return engine.id();
   }
 
+  @Override
+  public boolean takesWarmStart() {
+    return engine.takesHint();
+  }
+
   public Engine engine() {
     return engine;
   }
