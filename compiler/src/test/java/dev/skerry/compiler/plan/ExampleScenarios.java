@@ -46,6 +46,37 @@ public final class ExampleScenarios {
     return parse(name, smallText(name));
   }
 
+  /** The small version with another horizon (steps). */
+  public static Scenario small(String name, int horizon) {
+    return parse(name, smallText(name).replaceFirst("horizon \\d+", "horizon " + horizon));
+  }
+
+  /** The small version with another horizon and the plan's clusters line replaced (e.g. by "clusters 1"). */
+  public static Scenario small(String name, int horizon, String clusters) {
+    String t = smallText(name).replaceFirst("horizon \\d+", "horizon " + horizon);
+    return parse(name, clusters == null ? t : edit(t, "clusters 2 ordered", clusters));
+  }
+
+  /**
+   * A version small enough for ojAlgo in a unit test (a few seconds each, measured): the small
+   * version cut to a horizon just above its minimum time; for the rock field, only the three rocks
+   * beside the direct line and no clustering (ojAlgo needed over 60 s with the ten rocks clustered).
+   */
+  public static Scenario tiny(String name) {
+    switch (name) {
+      case "warehouse_floor":
+        return small(name, 10);
+      case "harbour_survey":
+        return small(name, 13);
+      case "rock_field":
+        String t = smallText(name).replaceFirst("horizon \\d+", "horizon 9");
+        t = t.replaceAll("(?m)^zone rock_(0[135-9]) .*$", "");
+        return parse(name, edit(t, "clusters 2 ordered", ""));
+      default:
+        throw new IllegalArgumentException("no tiny version of " + name);
+    }
+  }
+
   public static String smallText(String name) {
     String t = text(name);
     switch (name) {
