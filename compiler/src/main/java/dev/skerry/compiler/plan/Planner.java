@@ -83,7 +83,7 @@ public final class Planner {
     SolverBackend backend = choice.backend();
     SolveOptions run = options;
     List<String> notes = new ArrayList<>();
-    if (warmStart && backend.takesWarmStart() && options.warmStart().isEmpty()) {
+    if (warmStart && backend.takesWarmStart() && backend.exact() && options.warmStart().isEmpty()) {
       WarmStarts.Start start = WarmStarts.find(milp, backend, options, WARM_START_CAP);
       if (start.found()) {
         run = options.withWarmStart(start.values());

@@ -22,6 +22,11 @@ public interface SolverBackend {
     return true;
   }
 
+  /** False for a backend that solves a transformed copy, so its values are only nearly feasible. */
+  default boolean exact() {
+    return true;
+  }
+
   /**
    * Solves the model. Progress goes to the monitor from the backend's own threads; the monitor must
    * return quickly. The values of a result are checked against the model before it is returned (see

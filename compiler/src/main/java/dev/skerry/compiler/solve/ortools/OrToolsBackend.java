@@ -65,6 +65,11 @@ public final class OrToolsBackend implements SolverBackend {
     return engine.takesHint();
   }
 
+  @Override
+  public boolean exact() {
+    return engine.exact();
+  }
+
   public Engine engine() {
     return engine;
   }
