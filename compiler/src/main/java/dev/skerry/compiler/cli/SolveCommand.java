@@ -160,9 +160,9 @@ final class SolveCommand implements Callable<Integer> {
     }
   }
 
-  /** Progress on standard error every two seconds once a solve has run for more than one. */
-  private static SolveMonitor progress(PrintWriter err) {
-    long[] last = {0};
+  /** Progress on standard error once a solve has run for more than a second, then every two. */
+  static SolveMonitor progress(PrintWriter err) {
+    long[] last = {-1000};
     return p -> {
       long ms = p.elapsed().toMillis();
       if (ms < 1000 || ms - last[0] < 2000) {

@@ -10,21 +10,52 @@ import dev.skerry.compiler.solve.SolveOptions;
 import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.verify.Verifier;
 import dev.skerry.compiler.verify.VerifyReport;
+import dev.skerry.compiler.solve.SolverBackend;
+import java.time.Duration;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * Lower → solve → extract → verify, in one call. The verifier runs on every plan found. Used by
  * {@code skerry solve}, the closed loop and the tests.
  */
 public final class Planner {
-  private final Backends backends;
+  /** The most time one restricted solve of the warm-start heuristic may take. */
+  public static final Duration WARM_START_CAP = Duration.ofSeconds(10);
 
+  private final Backends backends;
+  private final boolean warmStart;
+
+  /** A planner that finds a warm start ({@link WarmStarts}) for backends that take one. */
   public Planner(Backends backends) {
+    this(backends, true);
+  }
+
+  public Planner(Backends backends, boolean warmStart) {
     this.backends = backends;
+    this.warmStart = warmStart;
+  }
+
+  /** The same backends, with the warm-start heuristic on or off. */
+  public Planner withWarmStart(boolean on) {
+    return new Planner(backends, on);
   }
 
   public static Planner standard() {
     return new Planner(Backends.standard());
+  }
+
+  /** The least time the solve proper is left after a warm start that used up the limit. */
+  private static final Duration MIN_TIME_LEFT = Duration.ofMillis(100);
+
+  private static SolveResult withNotes(SolveResult r, List<String> notes) {
+    if (notes.isEmpty()) {
+      return r;
+    }
+    SolveResult.Builder b = r.toBuilder();
+    notes.forEach(b::warning);
+    return b.build();
   }
 
   /** Solver options from the plan block: time limit, gap and threads. */
@@ -49,7 +80,24 @@ public final class Planner {
   public PlanResult plan(Scenario s, String solverId, SolveOptions options, SolveMonitor monitor) {
     Milp milp = Lowering.lower(s);
     Backends.Choice choice = backends.choose(solverId == null ? s.plan().solver() : solverId, milp);
-    SolveResult result = choice.backend().solve(milp, options, monitor);
+    SolverBackend backend = choice.backend();
+    SolveOptions run = options;
+    List<String> notes = new ArrayList<>();
+    if (warmStart && backend.takesWarmStart() && backend.exact() && options.warmStart().isEmpty()) {
+      WarmStarts.Start start = WarmStarts.find(milp, backend, options, WARM_START_CAP);
+      if (start.found()) {
+        run = options.withWarmStart(start.values());
+        Duration left = options.timeLimit().map(l -> l.minus(start.wallTime())).orElse(null);
+        if (left != null) {
+          run = run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
+        }
+        notes.add(String.format(Locale.ROOT, "warm start: objective %.6g found in %.2f s (%d zones needed)",
+            start.objective(), start.wallTime().toNanos() / 1e9, start.zonesUsed()));
+      } else {
+        notes.add("no warm start: " + start.reason());
+      }
+    }
+    SolveResult result = withNotes(backend.solve(milp, run, monitor), notes);
     if (!result.status().hasSolution()) {
       return new PlanResult(s, milp, result, null, List.of(), null, choice.notice());
     }

@@ -15,6 +15,19 @@ public interface SolverBackend {
   Capability capableOf(Milp model);
 
   /**
+   * Whether a warm start given in the options reaches the solver; false for a backend that drops
+   * every one (e.g. where a hint is unsafe), so callers need not spend time finding one.
+   */
+  default boolean takesWarmStart() {
+    return true;
+  }
+
+  /** False for a backend that solves a transformed copy, so its values are only nearly feasible. */
+  default boolean exact() {
+    return true;
+  }
+
+  /**
    * Solves the model. Progress goes to the monitor from the backend's own threads; the monitor must
    * return quickly. The values of a result are checked against the model before it is returned (see
    * {@link SolutionCheck}).

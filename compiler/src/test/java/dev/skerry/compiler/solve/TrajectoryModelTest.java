@@ -83,8 +83,10 @@ class TrajectoryModelTest {
         exact.objective(),
         diff,
         approx.status());
+    // CP-SAT gets equality rows widened by OrToolsRun.CP_SAT_EQUALITY_SLACK, so its point may break
+    // them by that much and undercut the optimum by about as little, never by more.
     assertTrue(
-        diff >= -1e-6, "a feasible point cannot beat the proven optimum: " + approx.summary());
+        diff >= -1e-4, "a nearly feasible point cannot beat the proven optimum by more: " + approx.summary());
     assertTrue(diff <= 1e-2, approx::summary);
   }
 

@@ -60,6 +60,16 @@ public final class OrToolsBackend implements SolverBackend {
     return engine.id();
   }
 
+  @Override
+  public boolean takesWarmStart() {
+    return engine.takesHint();
+  }
+
+  @Override
+  public boolean exact() {
+    return engine.exact();
+  }
+
   public Engine engine() {
     return engine;
   }

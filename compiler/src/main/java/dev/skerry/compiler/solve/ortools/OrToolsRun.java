@@ -27,6 +27,14 @@ final class OrToolsRun {
   /** CP-SAT scales continuous columns by this factor and rounds them to integers. */
   static final double CP_SAT_SCALING = 1e4;
 
+  /**
+   * CP-SAT gets each equality row as a range this wide on both sides: rounded to integers, an
+   * equality with a fractional right-hand side became an empty domain and the whole model was
+   * rejected as invalid (measured on every example). Half a unit of the scaled columns: the range
+   * then holds one integer, and the values stay within the solution check's error tolerance.
+   */
+  static final double CP_SAT_EQUALITY_SLACK = 0.5 / CP_SAT_SCALING;
+
   private static final Pattern UNKNOWN_STATUS = Pattern.compile("No enum .* value (-?\\d+)");
 
   private final Engine engine;
@@ -69,7 +77,9 @@ final class OrToolsRun {
       vars[v.index()] = solver.makeVar(v.lower(), v.upper(), v.isInteger(), v.name());
     }
     for (Row r : milp.rows()) {
-      MPConstraint c = solver.makeConstraint(r.lower(), r.upper(), r.name());
+      boolean widen = engine == Engine.CP_SAT && r.lower() == r.upper();
+      double slack = widen ? CP_SAT_EQUALITY_SLACK : 0;
+      MPConstraint c = solver.makeConstraint(r.lower() - slack, r.upper() + slack, r.name());
       int[] cols = r.cols();
       double[] coefs = r.coefs();
       for (int i = 0; i < cols.length; i++) {
