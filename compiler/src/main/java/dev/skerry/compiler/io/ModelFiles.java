@@ -32,12 +32,22 @@ public final class ModelFiles {
   public record Written(Path model, Optional<Path> nameMap, WriteSummary summary) {}
 
   /** Writes {@code milp} to {@code target} in {@code format}. */
+  /**
+   * Temporary files are created owner-only (0600); an output file should read like any other file
+   * the user writes, so it gets rw-r--r-- where the file system has POSIX permissions.
+   */
+  public static void readableByAll(Path file) throws IOException {
+    if (file.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+      Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+    }
+  }
+
   public static Written write(Milp milp, Path target, ModelFormat format) throws IOException {
     Path absolute = target.toAbsolutePath();
     Path folder = absolute.getParent();
     Path mapFile = absolute.resolveSibling(absolute.getFileName() + NAME_MAP_SUFFIX);
     Path temporary = Files.createTempFile(folder, "." + absolute.getFileName(), ".part");
-    dev.skerry.compiler.report.AtomicFiles.readableByAll(temporary);
+    readableByAll(temporary);
     Path mapTemporary = null;
     try {
       WriteSummary summary;
@@ -46,7 +56,7 @@ public final class ModelFiles {
       }
       if (!summary.names().isEmpty()) {
         mapTemporary = Files.createTempFile(folder, "." + mapFile.getFileName(), ".part");
-        dev.skerry.compiler.report.AtomicFiles.readableByAll(mapTemporary);
+        readableByAll(mapTemporary);
         summary.names().writeTo(mapTemporary);
         moveInto(mapTemporary, mapFile);
         mapTemporary = null;
