@@ -31,7 +31,6 @@ public final class ModelFiles {
    */
   public record Written(Path model, Optional<Path> nameMap, WriteSummary summary) {}
 
-  /** Writes {@code milp} to {@code target} in {@code format}. */
   /**
    * Temporary files are created owner-only (0600); an output file should read like any other file
    * the user writes, so it gets rw-r--r-- where the file system has POSIX permissions.
@@ -42,6 +41,7 @@ public final class ModelFiles {
     }
   }
 
+  /** Writes {@code milp} to {@code target} in {@code format}. */
   public static Written write(Milp milp, Path target, ModelFormat format) throws IOException {
     Path absolute = target.toAbsolutePath();
     Path folder = absolute.getParent();
