@@ -78,12 +78,30 @@ public final class Planner {
    * @throws IllegalStateException when no backend can run here
    */
   public PlanResult plan(Scenario s, String solverId, SolveOptions options, SolveMonitor monitor) {
+    return plan(s, solverId, options, monitor, null);
+  }
+
+  /**
+   * As {@link #plan(Scenario, String, SolveOptions, SolveMonitor)}, offering {@code hint} (may be
+   * null) a first look at the lowered model: a point it returns that the model accepts is the warm
+   * start (the closed loop hands in its previous plan shifted by one step); otherwise the
+   * heuristic of {@link WarmStarts} runs as usual.
+   */
+  public PlanResult plan(Scenario s, String solverId, SolveOptions options, SolveMonitor monitor,
+      java.util.function.Function<Milp, double[]> hint) {
     Milp milp = Lowering.lower(s);
     Backends.Choice choice = backends.choose(solverId == null ? s.plan().solver() : solverId, milp);
     SolverBackend backend = choice.backend();
     SolveOptions run = options;
     List<String> notes = new ArrayList<>();
-    if (warmStart && backend.takesWarmStart() && backend.exact() && options.warmStart().isEmpty()) {
+    if (hint != null && backend.takesWarmStart() && backend.exact() && options.warmStart().isEmpty()) {
+      double[] given = hint.apply(milp);
+      if (given != null && milp.maxViolation(given) <= 1e-6) {
+        run = options.withWarmStart(given);
+        notes.add("warm start: the previous plan shifted by one step");
+      }
+    }
+    if (warmStart && backend.takesWarmStart() && backend.exact() && run.warmStart().isEmpty()) {
       WarmStarts.Start start = WarmStarts.find(milp, backend, options, WARM_START_CAP);
       if (start.found()) {
         run = options.withWarmStart(start.values());

@@ -60,9 +60,14 @@ public final class ClosedLoop {
     Trajectory fallbackPlan = null;
     int fallbackIndex = 0;
     LoopResult.Stop stop = LoopResult.Stop.LIMIT;
+    dev.skerry.compiler.milp.Milp previousMilp = null;
+    double[] previousValues = null;
     for (int i = 0; i < scenario.plan().closedLoopMax(); i++) {
       Scenario now = scenario.withStart(p, v);
-      PlanResult r = planner.plan(now, solverId, options, SolveMonitor.NONE);
+      final dev.skerry.compiler.milp.Milp lastMilp = previousMilp;
+      final double[] lastValues = previousValues;
+      PlanResult r = planner.plan(now, solverId, options, SolveMonitor.NONE,
+          lastMilp == null ? null : next -> ShiftedStart.of(lastMilp, lastValues, next, dt));
       double seconds = r.solve().wallTime().toNanos() / 1e9;
       Vec2 u;
       boolean fallback;
@@ -74,12 +79,15 @@ public final class ClosedLoop {
         }
         fallbackPlan = r.trajectory();
         fallbackIndex = 1;
+        previousMilp = r.milp();
+        previousValues = r.solve().values();
         u = r.trajectory().samples().get(0).accel();
         fallback = false;
         predicted = wt * flownTime + wf * flownFuel + r.solve().objective();
       } else if (fallbackPlan != null && fallbackIndex < fallbackPlan.arrival()) {
         u = fallbackPlan.samples().get(fallbackIndex++).accel();
         fallback = true;
+        previousMilp = null;
         predicted = Double.NaN;
       } else {
         iterations.add(new Iteration(i, r.solve().status(), seconds, r.milp().binaryCount(), Double.NaN,

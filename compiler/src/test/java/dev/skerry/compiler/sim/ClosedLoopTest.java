@@ -70,4 +70,39 @@ class ClosedLoopTest {
     assertEquals(LoopResult.Stop.LIMIT, r.stop());
     assertEquals(3, r.iterations().size());
   }
+
+  /**
+   * Recursive feasibility (e.g. Mayne et al., Constrained model predictive control: stability and
+   * optimality, Automatica 36, 2000): after the first input is applied, the previous plan shifted by
+   * one step satisfies every row of the next iteration's MILP — which is why the closed loop can
+   * hand it to the solver as a warm start.
+   */
+  @Test
+  void thePreviousPlanShiftedByOneStepIsFeasibleForTheNextModel() {
+    Scenario s = scenario(AROUND_A_BLOCK);
+    var first = Planner.standard().withWarmStart(false).plan(s, "scip", Planner.optionsOf(s.plan()),
+        dev.skerry.compiler.solve.SolveMonitor.NONE);
+    var p0 = first.trajectory().samples().get(0);
+    double dt = s.plan().step();
+    var p1 = p0.position().plus(p0.velocity().times(dt)).plus(p0.accel().times(0.5 * dt * dt));
+    var v1 = p0.velocity().plus(p0.accel().times(dt));
+    var next = dev.skerry.compiler.lower.Lowering.lower(s.withStart(p1, v1));
+    double[] shifted = ShiftedStart.of(first.milp(), first.solve().values(), next, dt);
+    assertTrue(shifted != null, "every column of the next model has a counterpart");
+    StringBuilder worst = new StringBuilder();
+    for (var row : next.rows()) {
+      double a = row.activity(shifted);
+      if (a > row.upper() + 1e-6 || a < row.lower() - 1e-6) {
+        worst.append(row.name()).append(' ');
+      }
+    }
+    for (var v : next.variables()) {
+      if (shifted[v.index()] > v.upper() + 1e-6 || shifted[v.index()] < v.lower() - 1e-6) {
+        worst.append(v.name()).append(' ');
+      }
+    }
+    assertTrue(next.maxViolation(shifted) <= 1e-6, "violation " + next.maxViolation(shifted) + " in " + worst);
+    assertEquals(first.solve().objective() - (s.plan().timeWeight() * dt + s.plan().fuelWeight()
+        * (Math.abs(p0.accel().x()) + Math.abs(p0.accel().y())) * dt), next.objective().value(shifted), 1e-4);
+  }
 }
