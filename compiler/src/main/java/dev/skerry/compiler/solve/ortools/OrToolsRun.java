@@ -126,6 +126,11 @@ final class OrToolsRun {
               "CP-SAT refused its scaling parameter; it may call feasible models infeasible");
         }
       }
+      case SCIP ->
+          // SCIP installs its own Ctrl-C handler, which swallowed the signal before the JVM saw it
+          // (measured: `skerry solve` printed SCIP's "pressed CTRL-C" and ran on). Ours cancels
+          // through interruptSolve instead, and keeps the best plan.
+          solver.setSolverSpecificParametersAsString("misc/catchctrlc = FALSE");
       default -> {}
     }
     if (hint.isPresent()) {
