@@ -37,21 +37,14 @@ final class CompareCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "FILE", description = "Scenario file (.skerry).")
   Path file;
 
+  @CommandLine.Mixin LoopFlags flags = new LoopFlags();
+
   @Option(names = "--clusters", split = ",", paramLabel = "N",
       description = "Configurations: `none` or a number of clusters, comma-separated (default: none,2,3).")
   List<String> clusters = List.of("none", "2", "3");
 
   @Option(names = "--rule", paramLabel = "RULE", description = "Symmetry rule for clustered runs: none, ordered, sorted.")
   String rule;
-
-  @Option(names = "--solver", paramLabel = "ID", description = "Backend (default: the plan's `solver`).")
-  String solver;
-
-  @Option(names = "--time-limit", paramLabel = "SECONDS", description = "Time limit per iteration.")
-  Double timeLimit;
-
-  @Option(names = "--max-iterations", paramLabel = "N", description = "Overrides the plan's `closed_loop max`.")
-  Integer maxIterations;
 
   @Option(names = "--json", paramLabel = "FILE", description = "Every run and iteration as JSON.")
   Path json;
@@ -62,27 +55,22 @@ final class CompareCommand implements Callable<Integer> {
   @Option(names = "--report", paramLabel = "DIR", description = "Write a self-contained HTML page there.")
   Path report;
 
-  @Option(names = "--root", paramLabel = "DIR", description = "Workspace root that includes may not leave.")
-  Path root;
-
   @Override
   public Integer call() {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    Scenario s = RunCommand.Loops.load(file, root, out, err, "compare");
-    if (s == null) {
-      return RunCommand.Loops.lastExit;
+    Scenario s;
+    SolveOptions options;
+    try {
+      s = flags.load(file, out, "compare");
+      options = flags.options(s, "compare");
+    } catch (LoopFlags.Stop stop) {
+      err.println(stop.getMessage());
+      return stop.exitCode;
     }
     PlanOptions.SymmetryRule symmetry = rule == null ? s.plan().symmetry() : PlanOptions.SymmetryRule.fromKeyword(rule);
     if (symmetry == null) {
       err.println("skerry compare: unknown rule `" + rule + "`; choose none, ordered or sorted");
-      return 2;
-    }
-    if (maxIterations != null) {
-      s = s.withPlan(s.plan().withClosedLoopMax(Math.max(1, maxIterations)));
-    }
-    SolveOptions options = RunCommand.Loops.options(s, timeLimit, err);
-    if (options == null) {
       return 2;
     }
     List<LoopOutputs.Run> runs = new ArrayList<>();
@@ -107,7 +95,7 @@ final class CompareCommand implements Callable<Integer> {
       err.println("flying: " + label);
       err.flush();
       try {
-        runs.add(new LoopOutputs.Run(label, new ClosedLoop(Planner.standard(), options, 0, 1).run(variant, solver,
+        runs.add(new LoopOutputs.Run(label, new ClosedLoop(Planner.standard(), options, 0, 1).run(variant, flags.solver,
             it -> { })));
       } catch (IllegalArgumentException | IllegalStateException e) {
         err.println("skerry compare: " + e.getMessage());

@@ -1,8 +1,6 @@
 package dev.skerry.compiler.cli;
 
 import com.google.gson.GsonBuilder;
-import dev.skerry.compiler.check.CheckResult;
-import dev.skerry.compiler.diag.Diagnostic;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.plan.Planner;
 import dev.skerry.compiler.report.AtomicFiles;
@@ -14,7 +12,6 @@ import dev.skerry.compiler.solve.SolveOptions;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -38,11 +35,7 @@ final class RunCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "FILE", description = "Scenario file (.skerry).")
   Path file;
 
-  @Option(names = "--solver", paramLabel = "ID", description = "Backend (default: the plan's `solver`).")
-  String solver;
-
-  @Option(names = "--time-limit", paramLabel = "SECONDS", description = "Time limit per iteration.")
-  Double timeLimit;
+  @CommandLine.Mixin LoopFlags flags = new LoopFlags();
 
   @Option(names = "--disturbance", paramLabel = "M_PER_S",
       description = "Largest random velocity change per step and axis added by the plant (default 0).")
@@ -50,9 +43,6 @@ final class RunCommand implements Callable<Integer> {
 
   @Option(names = "--seed", paramLabel = "N", description = "Seed of the disturbance (default 1).")
   long seed = 1;
-
-  @Option(names = "--max-iterations", paramLabel = "N", description = "Overrides the plan's `closed_loop max`.")
-  Integer maxIterations;
 
   @Option(names = "--svg", paramLabel = "FILE", description = "Picture of the flown and first predicted path.")
   Path svg;
@@ -63,35 +53,26 @@ final class RunCommand implements Callable<Integer> {
   @Option(names = "--csv", paramLabel = "FILE", description = "One row per iteration.")
   Path csv;
 
-  @Option(names = "--root", paramLabel = "DIR", description = "Workspace root that includes may not leave.")
-  Path root;
-
   @Override
   public Integer call() {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    Scenario s = Loops.load(file, root, out, err, "run");
-    if (s == null) {
-      return Loops.lastExit;
-    }
-    if (maxIterations != null) {
-      if (maxIterations < 1) {
-        err.println("skerry run: --max-iterations must be at least 1");
-        return 2;
-      }
-      s = s.withPlan(s.plan().withClosedLoopMax(maxIterations));
+    Scenario s;
+    SolveOptions options;
+    try {
+      s = flags.load(file, out, "run");
+      options = flags.options(s, "run");
+    } catch (LoopFlags.Stop stop) {
+      err.println(stop.getMessage());
+      return stop.exitCode;
     }
     if (disturbance < 0) {
       err.println("skerry run: --disturbance cannot be negative");
       return 2;
     }
-    SolveOptions options = Loops.options(s, timeLimit, err);
-    if (options == null) {
-      return 2;
-    }
     LoopResult r;
     try {
-      r = new ClosedLoop(Planner.standard(), options, disturbance, seed).run(s, solver, it -> {
+      r = new ClosedLoop(Planner.standard(), options, disturbance, seed).run(s, flags.solver, it -> {
         err.printf(Locale.ROOT, "  iteration %d: %s, %.2f s, %,d binaries%s%n", it.index(),
             it.status().name().toLowerCase(Locale.ROOT), it.seconds(), it.binaries(), it.fallback() ? " (previous plan flown)" : "");
         err.flush();
@@ -118,44 +99,5 @@ final class RunCommand implements Callable<Integer> {
       return 1;
     }
     return r.stop() == LoopResult.Stop.ARRIVED && r.verify().ok() ? 0 : 1;
-  }
-
-  /** What run and compare share: loading a scenario and building solver options. */
-  static final class Loops {
-    static int lastExit;
-
-    private Loops() {}
-
-    static Scenario load(Path file, Path root, PrintWriter out, PrintWriter err, String command) {
-      CheckResult checked;
-      try {
-        checked = Inputs.check(file, root);
-      } catch (Inputs.UsageProblem e) {
-        err.println("skerry " + command + ": " + e.getMessage());
-        lastExit = 2;
-        return null;
-      }
-      for (Diagnostic d : checked.diagnostics()) {
-        out.println(d.format());
-      }
-      if (checked.hasErrors() || checked.scenario() == null) {
-        err.println("skerry " + command + ": " + file + " has errors; nothing flown");
-        lastExit = 1;
-        return null;
-      }
-      return checked.scenario();
-    }
-
-    static SolveOptions options(Scenario s, Double timeLimit, PrintWriter err) {
-      SolveOptions options = Planner.optionsOf(s.plan());
-      if (timeLimit != null) {
-        if (!(timeLimit > 0)) {
-          err.println("skerry: --time-limit must be positive");
-          return null;
-        }
-        options = options.withTimeLimit(Duration.ofNanos((long) (timeLimit * 1e9)));
-      }
-      return options;
-    }
   }
 }
