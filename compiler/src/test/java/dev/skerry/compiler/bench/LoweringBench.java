@@ -3,6 +3,7 @@ package dev.skerry.compiler.bench;
 import dev.skerry.compiler.analysis.Analysis;
 import dev.skerry.compiler.analysis.FormulationLayout;
 import dev.skerry.compiler.analysis.Sizes;
+import dev.skerry.compiler.io.CountingWriter;
 import dev.skerry.compiler.io.ModelFiles;
 import dev.skerry.compiler.io.ModelFormat;
 import dev.skerry.compiler.io.MpsWriter;
@@ -17,7 +18,6 @@ import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
 import dev.skerry.compiler.model.Zone;
-import java.io.Writer;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
@@ -100,7 +100,7 @@ public final class LoweringBench {
             ModelFiles.write(milp, file, ModelFormat.MPS);
             long t4 = System.nanoTime();
             cpu = Math.min(cpu, (processCpuNanos() - c0) / 1e9);
-            chars = sink.chars;
+            chars = sink.chars();
             analyse = Math.min(analyse, (t1 - t0) / 1e9);
             lower = Math.min(lower, (t2 - t1) / 1e9);
             counted = Math.min(counted, (t3 - t2) / 1e9);
@@ -156,33 +156,6 @@ public final class LoweringBench {
       return sun.getProcessCpuTime();
     }
     return -1;
-  }
-
-  /** A writer that only counts what it is given. */
-  static final class CountingWriter extends Writer {
-    long chars;
-
-    @Override
-    public void write(char[] buffer, int offset, int length) {
-      chars += length;
-    }
-
-    @Override
-    public void write(String text, int offset, int length) {
-      chars += length;
-    }
-
-    @Override
-    public Writer append(CharSequence text) {
-      chars += text.length();
-      return this;
-    }
-
-    @Override
-    public void flush() {}
-
-    @Override
-    public void close() {}
   }
 
   /** Work whose peak heap is measured. */

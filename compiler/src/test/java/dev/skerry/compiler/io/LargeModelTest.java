@@ -9,7 +9,6 @@ import dev.skerry.compiler.milp.MilpBuilder;
 import dev.skerry.compiler.milp.Origin;
 import dev.skerry.compiler.milp.Variable;
 import java.io.IOException;
-import java.io.Writer;
 import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -70,7 +69,7 @@ class LargeModelTest {
       System.out.printf(
           "%s: %d MB of text, %d aliased names, %.1f s of CPU (heap limit %d MB)%n",
           format,
-          out.chars / 1_000_000,
+          out.chars() / 1_000_000,
           summary.names().size(),
           seconds(t),
           Runtime.getRuntime().maxMemory() / 1_000_000);
@@ -133,32 +132,5 @@ class LargeModelTest {
     System.gc();
     Runtime r = Runtime.getRuntime();
     return (r.totalMemory() - r.freeMemory()) / 1_000_000;
-  }
-
-  /** Counts characters and throws them away, so the test needs no disk space. */
-  static final class CountingWriter extends Writer {
-    long chars;
-
-    @Override
-    public void write(char[] buffer, int offset, int length) {
-      chars += length;
-    }
-
-    @Override
-    public void write(String text, int offset, int length) {
-      chars += length;
-    }
-
-    @Override
-    public Writer append(CharSequence text) {
-      chars += text.length();
-      return this;
-    }
-
-    @Override
-    public void flush() {}
-
-    @Override
-    public void close() {}
   }
 }
