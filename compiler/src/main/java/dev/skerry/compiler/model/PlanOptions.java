@@ -5,7 +5,10 @@ import java.time.Duration;
 
 /**
  * Planning options, SI units. {@code horizon} is a number of steps N (the vehicle's states are
- * p_0..p_N); {@code clusters} is 0 when zones are avoided one by one.
+ * p_0..p_N); {@code clusters} is 0 when zones are avoided one by one. For a fleet: {@code
+ * separation} is the least centre-to-centre distance between two vehicles (0: the sum of their
+ * radii), and {@code latestArrival} makes the time term the latest arrival (makespan) instead of
+ * the sum of the vehicles' arrival times.
  */
 public record PlanOptions(
     double step,
@@ -21,7 +24,17 @@ public record PlanOptions(
     int threads,
     boolean guard,
     boolean pruning,
-    SourceRange range) {
+    SourceRange range,
+    double separation,
+    boolean latestArrival) {
+
+  /** Options of a single-vehicle plan: no separation distance, time summed over vehicles. */
+  public PlanOptions(double step, int horizon, double timeWeight, double fuelWeight, int clusters,
+      SymmetryRule symmetry, int closedLoopMax, String solver, Duration timeLimit, double relativeGap, int threads,
+      boolean guard, boolean pruning, SourceRange range) {
+    this(step, horizon, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver, timeLimit, relativeGap,
+        threads, guard, pruning, range, 0, false);
+  }
 
   public static final String DEFAULT_SOLVER = "default";
 
@@ -60,26 +73,36 @@ public record PlanOptions(
 
   public PlanOptions withClusters(int count, SymmetryRule rule) {
     return new PlanOptions(step, horizon, timeWeight, fuelWeight, count, rule, closedLoopMax, solver,
-        timeLimit, relativeGap, threads, guard, pruning, range);
+        timeLimit, relativeGap, threads, guard, pruning, range, separation, latestArrival);
   }
 
   public PlanOptions withHorizon(int steps) {
     return new PlanOptions(step, steps, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver,
-        timeLimit, relativeGap, threads, guard, pruning, range);
+        timeLimit, relativeGap, threads, guard, pruning, range, separation, latestArrival);
   }
 
   public PlanOptions withPruning(boolean on) {
     return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver,
-        timeLimit, relativeGap, threads, guard, on, range);
+        timeLimit, relativeGap, threads, guard, on, range, separation, latestArrival);
   }
 
   public PlanOptions withClosedLoopMax(int iterations) {
     return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, iterations, solver,
-        timeLimit, relativeGap, threads, guard, pruning, range);
+        timeLimit, relativeGap, threads, guard, pruning, range, separation, latestArrival);
   }
 
   public PlanOptions withGuard(boolean on) {
     return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver,
-        timeLimit, relativeGap, threads, on, pruning, range);
+        timeLimit, relativeGap, threads, on, pruning, range, separation, latestArrival);
+  }
+
+  public PlanOptions withSeparation(double distance) {
+    return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver,
+        timeLimit, relativeGap, threads, guard, pruning, range, distance, latestArrival);
+  }
+
+  public PlanOptions withLatestArrival(boolean latest) {
+    return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, symmetry, closedLoopMax, solver,
+        timeLimit, relativeGap, threads, guard, pruning, range, separation, latest);
   }
 }

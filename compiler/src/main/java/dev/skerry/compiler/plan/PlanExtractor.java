@@ -17,6 +17,11 @@ import java.util.TreeMap;
 public final class PlanExtractor {
   private PlanExtractor() {}
 
+  /** One trajectory per vehicle, in the scenario's vehicle order. */
+  public static List<Trajectory> trajectories(Scenario s, Milp milp, double[] x) {
+    return List.of(trajectory(s, milp, x));
+  }
+
   public static Trajectory trajectory(Scenario s, Milp milp, double[] x) {
     int n = s.plan().horizon();
     double[][] state = new double[6][n + 1];

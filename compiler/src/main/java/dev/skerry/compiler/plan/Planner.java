@@ -117,12 +117,12 @@ public final class Planner {
     }
     SolveResult result = withNotes(backend.solve(milp, run, monitor), notes);
     if (!result.status().hasSolution()) {
-      return new PlanResult(s, milp, result, null, List.of(), null, choice.notice());
+      return new PlanResult(s, milp, result, List.of(), List.of(), null, choice.notice());
     }
     double[] x = result.values();
-    Trajectory path = PlanExtractor.trajectory(s, milp, x);
+    List<Trajectory> paths = PlanExtractor.trajectories(s, milp, x);
     List<ClusterBox> clusters = PlanExtractor.clusters(s, milp, x);
-    VerifyReport report = Verifier.verify(s, path);
-    return new PlanResult(s, milp, result, path, clusters, report, choice.notice());
+    VerifyReport report = Verifier.verify(s, paths);
+    return new PlanResult(s, milp, result, paths, clusters, report, choice.notice());
   }
 }

@@ -36,6 +36,14 @@ public final class Verifier {
     return new Verifier(scenario).run(path);
   }
 
+  /** Every vehicle's path (in the scenario's vehicle order). */
+  public static VerifyReport verify(Scenario scenario, List<Trajectory> paths) {
+    if (paths.size() == 1) {
+      return verify(scenario, paths.get(0));
+    }
+    throw new UnsupportedOperationException("fleet verification is not written yet");
+  }
+
   private VerifyReport run(Trajectory path) {
     Vehicle v = scenario.vehicle();
     List<Violation> out = new ArrayList<>();

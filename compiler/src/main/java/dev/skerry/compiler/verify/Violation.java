@@ -12,7 +12,10 @@ public record Violation(Kind kind, int step, String entity, double amount, Strin
     ACCEL("accel"),
     DYNAMICS("dynamics"),
     TARGET("target"),
-    WAYPOINT("waypoint");
+    WAYPOINT("waypoint"),
+    SEPARATION("separation"),
+    ALTITUDE("altitude"),
+    CLIMB("climb");
 
     private final String word;
 
