@@ -2,6 +2,7 @@ package dev.skerry.compiler.analysis;
 
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Span;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Zone;
 import java.util.ArrayList;
@@ -59,10 +60,38 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
    * {@code bigM} (the binary's M, or for a hard row the relaxation M). For a cluster the row's
    * right-hand side is the cluster bound variable of face j and {@code offset} is unused.
    */
-  public record FaceRow(int face, Vec2 normal, double offset, int[] points, double[] bigM) {
-    public int terms(boolean cluster, boolean hard, boolean relaxed) {
-      return Geometry.termCount(normal) + (cluster ? 1 : 0) + (hard ? (relaxed ? 1 : 0) : 1);
+  public record FaceRow(int face, Vec2 normal, double offset, int[] points, double[] bigM, double nz) {
+    public FaceRow(int face, Vec2 normal, double offset, int[] points, double[] bigM) {
+      this(face, normal, offset, points, bigM, 0);
     }
+
+    public int terms(boolean cluster, boolean hard, boolean relaxed) {
+      return Geometry.termCount(normal, nz) + (cluster ? 1 : 0) + (hard ? (relaxed ? 1 : 0) : 1);
+    }
+  }
+
+  /**
+   * A face of an obstacle in 3-D form: the obstacle lies in {@code n·p + nz·z ≤ offset}; a zone
+   * with an altitude range adds a ceiling face (nz = 1) and a floor face (nz = −1) to its plan-view
+   * faces (nz = 0).
+   */
+  record SolidFace(Vec2 normal, double nz, double offset) {}
+
+  /**
+   * The faces of a zone grown by {@code planMargin} in plan view and {@code verticalMargin} above
+   * and below: plan faces of the grown shape, then, when the zone has an altitude range in a 3-D
+   * scenario, the ceiling z ≤ hi + m and the floor −z ≤ −(lo − m).
+   */
+  static List<SolidFace> solidFaces(Zone zone, double planMargin, double verticalMargin, boolean threeD) {
+    List<SolidFace> out = new ArrayList<>();
+    for (Shape.Face f : zone.shape().inflate(planMargin).faces()) {
+      out.add(new SolidFace(f.normal(), 0, f.offset()));
+    }
+    if (threeD && zone.altitude() != null) {
+      out.add(new SolidFace(Vec2.ZERO, 1, zone.altitude().hi() + verticalMargin));
+      out.add(new SolidFace(Vec2.ZERO, -1, -(zone.altitude().lo() - verticalMargin)));
+    }
+    return out;
   }
 
   /** The position indices of slot s. */
@@ -85,8 +114,14 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
 
   static Obstacle zone(Zone zone, String tag, double radius, FormulationLayout.Domains d, ArrivalLayout arrival,
       List<Fact> facts, long[] tally) {
-    Shape inflated = zone.shape().inflate(radius);
-    List<Shape.Face> faces = inflated.faces();
+    return zone(zone, tag, radius, radius, d, arrival, facts, tally);
+  }
+
+  static Obstacle zone(Zone zone, String tag, double planMargin, double verticalMargin, FormulationLayout.Domains d,
+      ArrivalLayout arrival, List<Fact> facts, long[] tally) {
+    Shape inflated = zone.shape().inflate(planMargin);
+    List<SolidFace> faces = solidFaces(zone, planMargin, verticalMargin, d.threeD());
+    Span band = d.threeD() && zone.altitude() != null ? zone.altitude().expand(verticalMargin) : null;
     List<Slot> slots = new ArrayList<>();
     for (int s = firstSlot(d.guard()); s <= lastSlot(d.guard(), d.horizon()); s++) {
       int[] pts = points(s, d.guard());
@@ -99,16 +134,24 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
       for (int p : pts) {
         u = u.union(d.position(p));
       }
-      if (Geometry.interiorsDisjoint(inflated, u)) {
+      boolean apart = Geometry.interiorsDisjoint(inflated, u);
+      if (!apart && band != null) {
+        Span a = d.altitude(pts[0]);
+        for (int p : pts) {
+          a = a.union(d.altitude(p));
+        }
+        apart = !band.overlapsInterior(a);
+      }
+      if (apart) {
         tally[0]++;
         continue;
       }
       List<FaceRow> possible = new ArrayList<>();
       for (int j = 0; j < faces.size(); j++) {
-        Shape.Face f = faces.get(j);
+        SolidFace f = faces.get(j);
         boolean ok = true;
         for (int p : pts) {
-          ok &= !Geometry.impossibleWithin(d.position(p), f.normal(), f.offset());
+          ok &= !Geometry.impossibleWithin(d.position(p), d.altitude(p), f.normal(), f.nz(), f.offset());
         }
         if (ok) {
           possible.add(needed(j, f, pts, d));
@@ -129,33 +172,33 @@ public record AvoidanceLayout(List<Obstacle> obstacles, long skippedSlots, long 
     return new Obstacle(zone.name(), tag, -1, zone.isBox(), slots);
   }
 
-  private static List<FaceRow> allFaces(List<Shape.Face> faces, int[] pts, FormulationLayout.Domains d) {
+  private static List<FaceRow> allFaces(List<SolidFace> faces, int[] pts, FormulationLayout.Domains d) {
     List<FaceRow> rows = new ArrayList<>(faces.size());
     for (int j = 0; j < faces.size(); j++) {
-      Shape.Face f = faces.get(j);
+      SolidFace f = faces.get(j);
       double[] m = new double[pts.length];
       for (int i = 0; i < pts.length; i++) {
-        m[i] = BigM.pad(f.offset() - Geometry.minOver(d.position(pts[i]), f.normal()));
+        m[i] = BigM.pad(f.offset() - Geometry.minOver(d.position(pts[i]), d.altitude(pts[i]), f.normal(), f.nz()));
       }
-      rows.add(new FaceRow(j, f.normal(), f.offset(), pts.clone(), m));
+      rows.add(new FaceRow(j, f.normal(), f.offset(), pts.clone(), m, f.nz()));
     }
     return rows;
   }
 
   /** Face j with rows only at the points whose reach box does not already satisfy it throughout. */
-  private static FaceRow needed(int j, Shape.Face f, int[] pts, FormulationLayout.Domains d) {
+  private static FaceRow needed(int j, SolidFace f, int[] pts, FormulationLayout.Domains d) {
     int[] keep = new int[pts.length];
     double[] m = new double[pts.length];
     int n = 0;
     for (int p : pts) {
-      double raw = f.offset() - Geometry.minOver(d.position(p), f.normal());
+      double raw = f.offset() - Geometry.minOver(d.position(p), d.altitude(p), f.normal(), f.nz());
       if (raw > 0) {
         keep[n] = p;
         m[n] = BigM.pad(raw);
         n++;
       }
     }
-    return new FaceRow(j, f.normal(), f.offset(), Arrays.copyOf(keep, n), Arrays.copyOf(m, n));
+    return new FaceRow(j, f.normal(), f.offset(), Arrays.copyOf(keep, n), Arrays.copyOf(m, n), f.nz());
   }
 
   /**

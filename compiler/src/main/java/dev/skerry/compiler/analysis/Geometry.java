@@ -2,6 +2,7 @@ package dev.skerry.compiler.analysis;
 
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Span;
 import dev.skerry.compiler.model.Vec2;
 
 /** Extremes of linear functions over boxes and box-versus-convex-shape tests used by the layout. */
@@ -63,6 +64,26 @@ public final class Geometry {
     return maxOver(b, n) < c - TOLERANCE * Math.max(1, Math.abs(c));
   }
 
+
+  /** max of {@code n·p + nz·z} over the box and the altitude span ({@code nz = 0}: the span is not used). */
+  public static double maxOver(Bounds b, Span alt, Vec2 n, double nz) {
+    return maxOver(b, n) + (nz == 0 ? 0 : nz * (nz > 0 ? alt.hi() : alt.lo()));
+  }
+
+  /** min of {@code n·p + nz·z} over the box and the altitude span. */
+  public static double minOver(Bounds b, Span alt, Vec2 n, double nz) {
+    return minOver(b, n) + (nz == 0 ? 0 : nz * (nz > 0 ? alt.lo() : alt.hi()));
+  }
+
+  /** True when no point of the box and span satisfies {@code n·p + nz·z ≥ c}, by more than the tolerance. */
+  public static boolean impossibleWithin(Bounds b, Span alt, Vec2 n, double nz, double c) {
+    return maxOver(b, alt, n, nz) < c - TOLERANCE * Math.max(1, Math.abs(c));
+  }
+
+  /** Non-zero coefficients of {@code n·p + nz·z}. */
+  public static int termCount(Vec2 n, double nz) {
+    return termCount(n) + (nz != 0 ? 1 : 0);
+  }
 
   /** The 1 or 2 non-zero coefficients a normal puts into a row. */
   public static int termCount(Vec2 n) {

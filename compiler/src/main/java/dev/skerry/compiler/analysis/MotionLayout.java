@@ -3,6 +3,7 @@ package dev.skerry.compiler.analysis;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Span;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
 import java.util.ArrayList;
@@ -28,19 +29,27 @@ public record MotionLayout(
     boolean fuel,
     String areaTag,
     String areaName,
-    List<KeepInRow> keepIn) {
+    List<KeepInRow> keepIn,
+    Climb climb) {
 
   public MotionLayout {
     keepIn = List.copyOf(keepIn);
   }
 
+  /**
+   * The altitude channel of a 3-D scenario (null in 2-D): z_k, ż_k (k = 0..N) and a_k (k = 0..N−1)
+   * with the same zero-order hold, |ż| ≤ {@code maxRate} and |a| ≤ {@code maxAccel} as bounds, z
+   * within {@code altitudes} (keep-in floor and ceiling, shrunk by the radius); with fuel, an
+   * auxiliary per step for |a|.
+   */
+  public record Climb(double start, double startRate, double maxRate, double maxAccel, Span altitudes) {}
+
   /** One keep-in row {@code n·p_k ≤ offset} of a polygon area. */
   public record KeepInRow(int step, int face, Vec2 normal, double offset) {}
 
-  static MotionLayout of(Scenario s, Names names, Reachability reach, boolean pruning) {
-    Vehicle v = s.vehicle();
+  static MotionLayout of(Scenario s, Vehicle v, String tag, Names names, Reachability reach, boolean pruning) {
     int n = s.plan().horizon();
-    Shape area = Reachability.deflatedArea(s);
+    Shape area = Reachability.deflatedArea(s, v);
     List<KeepInRow> rows = new ArrayList<>();
     if (area instanceof Shape.Polygon) {
       List<Shape.Face> faces = area.faces();
@@ -54,13 +63,18 @@ public record MotionLayout(
         }
       }
     }
-    return new MotionLayout(names.tag("vehicle", v.name()), v.name(), n, s.plan().step(), v.start(),
+    Climb climb = null;
+    if (v.vertical() != null) {
+      Vehicle.Vertical vt = v.vertical();
+      climb = new Climb(vt.start(), vt.startRate(), vt.maxClimb(), vt.maxClimbAccel(), VerticalReach.keepIn(s, v));
+    }
+    return new MotionLayout(tag, v.name(), n, s.plan().step(), v.start(),
         v.startVelocity(), LimitPolygon.inscribed(v.maxSpeed(), v.sides()),
         LimitPolygon.inscribed(v.maxAccel(), v.sides()), reach.keepIn(), s.plan().fuelWeight() != 0,
-        names.tag("area", s.area().name()), s.area().name(), rows);
+        names.tag("area", s.area().name()), s.area().name(), rows, climb);
   }
 
-  /** Bound of every fuel auxiliary: the largest per-axis acceleration magnitude. */
+  /** Bound of every plan-view fuel auxiliary: the largest per-axis acceleration magnitude. */
   public double fuelBound() {
     return Math.max(Math.max(-accel.xmin(), accel.xmax()), Math.max(-accel.ymin(), accel.ymax()));
   }
@@ -80,6 +94,17 @@ public record MotionLayout(
     }
     for (KeepInRow r : keepIn) {
       c.row(Geometry.termCount(r.normal()));
+    }
+    if (climb != null) {
+      c.continuous += 2L * (n + 1) + n;
+      c.rows(n, 4);
+      c.rows(n, 3);
+      if (fuel) {
+        c.continuous += n;
+        for (int k = 0; k < n; k++) {
+          c.rows(2, arrival.hasDone(k) ? 3 : 2);
+        }
+      }
     }
   }
 }

@@ -33,12 +33,16 @@ public record Reachability(Bounds keepIn, List<Bounds> positions, List<Bounds> v
   }
 
   public static Reachability of(Scenario scenario) {
-    Vehicle v = scenario.vehicle();
+    return of(scenario, scenario.vehicle());
+  }
+
+  /** The reach boxes of vehicle {@code v} of the scenario (plan view). */
+  public static Reachability of(Scenario scenario, Vehicle v) {
     int n = scenario.plan().horizon();
     double dt = scenario.plan().step();
     LimitPolygon speed = LimitPolygon.inscribed(v.maxSpeed(), v.sides());
     LimitPolygon accel = LimitPolygon.inscribed(v.maxAccel(), v.sides());
-    Bounds keepIn = deflatedArea(scenario).bounds();
+    Bounds keepIn = deflatedArea(scenario, v).bounds();
     List<Fact> facts = new ArrayList<>();
     double[][] x = axis(v.start().x(), v.startVelocity().x(), speed.xmin(), speed.xmax(), accel.xmin(),
         accel.xmax(), dt, n);
@@ -82,14 +86,19 @@ public record Reachability(Bounds keepIn, List<Bounds> positions, List<Bounds> v
 
   /** The keep-in area shrunk by the vehicle's radius: the region its centre must stay in. */
   public static Shape deflatedArea(Scenario scenario) {
-    return scenario.area().shape().inflate(-scenario.vehicle().radius());
+    return deflatedArea(scenario, scenario.vehicle());
+  }
+
+  /** The keep-in area shrunk by vehicle {@code v}'s radius. */
+  public static Shape deflatedArea(Scenario scenario, Vehicle v) {
+    return scenario.area().shape().inflate(-v.radius());
   }
 
   /**
    * Per-axis envelopes: rows 0/1 the position min/max, rows 2/3 the velocity min/max, row 4 element
    * 0 positive when the velocity interval ever became empty.
    */
-  private static double[][] axis(double p0, double v0, double vlo, double vhi, double alo, double ahi,
+  static double[][] axis(double p0, double v0, double vlo, double vhi, double alo, double ahi,
       double dt, int n) {
     double[][] out = new double[5][n + 1];
     out[0][0] = p0;

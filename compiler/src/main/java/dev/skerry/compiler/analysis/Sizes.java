@@ -10,6 +10,7 @@ package dev.skerry.compiler.analysis;
  * @param waypointBinaries visit binaries of waypoints
  * @param clusterAssignmentBinaries zone-to-cluster assignment binaries
  * @param clusterAvoidanceBinaries face binaries of cluster boxes
+ * @param separationBinaries face binaries keeping pairs of vehicles of a fleet apart
  */
 public record Sizes(
     long zoneBoxBinaries,
@@ -18,13 +19,21 @@ public record Sizes(
     long waypointBinaries,
     long clusterAssignmentBinaries,
     long clusterAvoidanceBinaries,
+    long separationBinaries,
     long continuous,
     long rows,
     long nonZeros) {
 
+  /** Sizes of a model without separation binaries (one vehicle). */
+  public Sizes(long zoneBoxBinaries, long zonePolygonBinaries, long arrivalBinaries, long waypointBinaries,
+      long clusterAssignmentBinaries, long clusterAvoidanceBinaries, long continuous, long rows, long nonZeros) {
+    this(zoneBoxBinaries, zonePolygonBinaries, arrivalBinaries, waypointBinaries, clusterAssignmentBinaries,
+        clusterAvoidanceBinaries, 0, continuous, rows, nonZeros);
+  }
+
   public long binaries() {
     return zoneBoxBinaries + zonePolygonBinaries + arrivalBinaries + waypointBinaries
-        + clusterAssignmentBinaries + clusterAvoidanceBinaries;
+        + clusterAssignmentBinaries + clusterAvoidanceBinaries + separationBinaries;
   }
 
   public long columns() {
@@ -39,6 +48,7 @@ public record Sizes(
     long waypoint;
     long clusterAssignment;
     long clusterAvoidance;
+    long separation;
     long continuous;
     long rows;
     long nonZeros;
@@ -54,7 +64,7 @@ public record Sizes(
     }
 
     Sizes toSizes() {
-      return new Sizes(zoneBox, zonePolygon, arrival, waypoint, clusterAssignment, clusterAvoidance,
+      return new Sizes(zoneBox, zonePolygon, arrival, waypoint, clusterAssignment, clusterAvoidance, separation,
           continuous, rows, nonZeros);
     }
   }

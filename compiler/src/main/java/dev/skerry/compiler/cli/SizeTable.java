@@ -36,8 +36,9 @@ final class SizeTable {
     row(out, r.comparisonLabel(), r.comparison());
     Sizes w = r.asWritten();
     out.printf(Locale.ROOT, "  binaries as written: %,d box-zone faces, %,d polygon faces, %,d arrival, %,d waypoint,"
-            + " %,d cluster assignment, %,d cluster avoidance%n", w.zoneBoxBinaries(), w.zonePolygonBinaries(),
-        w.arrivalBinaries(), w.waypointBinaries(), w.clusterAssignmentBinaries(), w.clusterAvoidanceBinaries());
+            + " %,d cluster assignment, %,d cluster avoidance%s%n", w.zoneBoxBinaries(), w.zonePolygonBinaries(),
+        w.arrivalBinaries(), w.waypointBinaries(), w.clusterAssignmentBinaries(), w.clusterAvoidanceBinaries(),
+        result.scenario().fleet() ? String.format(Locale.ROOT, ", %,d vehicle separation", w.separationBinaries()) : "");
     for (Fact f : r.facts()) {
       out.println("  note: " + f.message() + " [" + f.code() + "]");
     }
@@ -91,6 +92,7 @@ final class SizeTable {
     cause.addProperty("waypoint", s.waypointBinaries());
     cause.addProperty("clusterAssignment", s.clusterAssignmentBinaries());
     cause.addProperty("clusterAvoidance", s.clusterAvoidanceBinaries());
+    cause.addProperty("separation", s.separationBinaries());
     o.add("binariesByCause", cause);
     return o;
   }

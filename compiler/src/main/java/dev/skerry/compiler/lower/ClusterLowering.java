@@ -6,6 +6,7 @@ import dev.skerry.compiler.milp.Origin;
 import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
+import java.util.List;
 
 /**
  * In-MILP clustering as laid out by {@link ClusterLayout}: cluster bound columns, assignment
@@ -18,12 +19,17 @@ final class ClusterLowering {
 
   private ClusterLowering() {}
 
-  static void lower(LoweringContext c) {
+  /** Lowers the fleet's cluster boxes once and hands their bound columns to every vehicle's context. */
+  static void lower(List<LoweringContext> parts) {
+    LoweringContext c = parts.get(0);
     ClusterLayout cl = c.layout.clusters();
     if (cl == null) {
       return;
     }
     c.clusterBounds = new Variable[cl.count()][4];
+    for (LoweringContext other : parts) {
+      other.clusterBounds = c.clusterBounds;
+    }
     for (int l = 0; l < cl.count(); l++) {
       String e = "c" + l;
       for (int side = 0; side < 4; side++) {

@@ -19,7 +19,7 @@ final class DynamicsLowering {
   private DynamicsLowering() {}
 
   static void lower(LoweringContext c) {
-    MotionLayout m = c.layout.motion();
+    MotionLayout m = c.motion();
     MilpBuilder b = c.builder;
     String t = c.vehicleTag;
     int n = m.horizon();
@@ -53,6 +53,37 @@ final class DynamicsLowering {
       b.addEquality("dynvx_" + t + "_" + k, step(c.vx[k + 1], c.px[k], c.vx[k], c.ux[k], a[1], bu[1][0]), 0, o);
       b.addEquality("dynvy_" + t + "_" + k, step(c.vy[k + 1], c.py[k], c.vy[k], c.uy[k], a[1], bu[1][0]), 0, o);
     }
+    if (m.climb() != null) {
+      altitude(c, m, a, bu);
+    }
+  }
+
+  /**
+   * The altitude channel of a 3-D scenario: z_k, ż_k, a_k with the same zero-order hold; ż and a
+   * bounded by the climb limits, z by the keep-in floor and ceiling (shrunk by the radius).
+   */
+  private static void altitude(LoweringContext c, MotionLayout m, double[][] a, double[][] bu) {
+    MilpBuilder b = c.builder;
+    String t = c.vehicleTag;
+    MotionLayout.Climb cl = m.climb();
+    int n = m.horizon();
+    for (int k = 0; k <= n; k++) {
+      if (k == 0) {
+        c.pz[0] = b.newContinuous("pz_" + t + "_0", cl.start(), cl.start(), origin(c, "pz", 0));
+        c.vz[0] = b.newContinuous("vz_" + t + "_0", cl.startRate(), cl.startRate(), origin(c, "vz", 0));
+      } else {
+        c.pz[k] = b.newContinuous("pz_" + t + "_" + k, cl.altitudes().lo(), cl.altitudes().hi(), origin(c, "pz", k));
+        c.vz[k] = b.newContinuous("vz_" + t + "_" + k, -cl.maxRate(), cl.maxRate(), origin(c, "vz", k));
+      }
+      if (k < n) {
+        c.uz[k] = b.newContinuous("uz_" + t + "_" + k, -cl.maxAccel(), cl.maxAccel(), origin(c, "uz", k));
+      }
+    }
+    for (int k = 0; k < n; k++) {
+      Origin o = origin(c, "dynamics", k);
+      b.addEquality("dynpz_" + t + "_" + k, step(c.pz[k + 1], c.pz[k], c.vz[k], c.uz[k], a[0], bu[0][0]), 0, o);
+      b.addEquality("dynvz_" + t + "_" + k, step(c.vz[k + 1], c.pz[k], c.vz[k], c.uz[k], a[1], bu[1][0]), 0, o);
+    }
   }
 
   /** {@code next − (a[0]·p + a[1]·v + bu·u)}; zero coefficients vanish when the row is merged. */
@@ -61,6 +92,6 @@ final class DynamicsLowering {
   }
 
   static Origin origin(LoweringContext c, String role, int k) {
-    return Origin.of(c.vehicle, role, k);
+    return c.origin(c.vehicle, role, k);
   }
 }

@@ -7,15 +7,15 @@ import dev.skerry.compiler.milp.Origin;
 import dev.skerry.compiler.milp.Variable;
 
 /**
- * 1-norm fuel: per axis w_k ≥ u_k and w_k ≥ −u_k (k = 0..N−1), so at the optimum w = |u| and
- * fuel = Σ_k Σ_axis Δt·w. After arrival the rows are relaxed by M·d_k (M the largest |u|), so fuel
+ * 1-norm fuel: per axis w_k ≥ u_k and w_k ≥ −u_k (k = 0..N−1; the vertical axis too in 3-D), so at
+ * the optimum w = |u| and fuel = Σ_k Σ_axis Δt·w. After arrival the rows are relaxed by M·d_k (M the largest |u|), so fuel
  * counts the inputs up to arrival only. Present only when fuel has a weight in the objective.
  */
 final class FuelLowering {
   private FuelLowering() {}
 
   static void lower(LoweringContext c) {
-    MotionLayout m = c.layout.motion();
+    MotionLayout m = c.motion();
     if (!m.fuel()) {
       return;
     }
@@ -29,6 +29,11 @@ final class FuelLowering {
       Origin o = DynamicsLowering.origin(c, "fuel", k);
       absolute(c, "fuelx", c.wx[k], c.ux[k], d, relax, k, o);
       absolute(c, "fuely", c.wy[k], c.uy[k], d, relax, k, o);
+      if (m.climb() != null) {
+        double zb = m.climb().maxAccel();
+        c.wz[k] = c.builder.newContinuous("wz_" + t + "_" + k, 0, zb, DynamicsLowering.origin(c, "wz", k));
+        absolute(c, "fuelz", c.wz[k], c.uz[k], d, BigM.pad(zb), k, o);
+      }
     }
   }
 
@@ -45,13 +50,16 @@ final class FuelLowering {
 
   /** Σ Δt·(wx + wy) added to an objective with weight {@code weight}. */
   static void addCost(LoweringContext c, LinearExpr objective, double weight) {
-    MotionLayout m = c.layout.motion();
+    MotionLayout m = c.motion();
     if (!m.fuel()) {
       return;
     }
     for (int k = 0; k < m.horizon(); k++) {
       objective.add(c.wx[k], weight * m.step());
       objective.add(c.wy[k], weight * m.step());
+      if (m.climb() != null) {
+        objective.add(c.wz[k], weight * m.step());
+      }
     }
   }
 }

@@ -12,10 +12,10 @@ final class KeepInLowering {
   private KeepInLowering() {}
 
   static void lower(LoweringContext c) {
-    MotionLayout m = c.layout.motion();
+    MotionLayout m = c.motion();
     for (MotionLayout.KeepInRow r : m.keepIn()) {
       c.builder.addLessOrEqual("in_" + m.areaTag() + "_f" + r.face() + "_" + r.step(), c.position(r.normal(), r.step()),
-          r.offset(), Origin.of(m.areaName(), "keep-in", r.step()));
+          r.offset(), c.origin(m.areaName(), "keep-in", r.step()));
     }
   }
 }

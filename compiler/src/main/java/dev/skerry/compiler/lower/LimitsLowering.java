@@ -13,7 +13,7 @@ final class LimitsLowering {
   private LimitsLowering() {}
 
   static void lower(LoweringContext c) {
-    MotionLayout m = c.layout.motion();
+    MotionLayout m = c.motion();
     LimitPolygon speed = m.speed();
     LimitPolygon accel = m.accel();
     String t = c.vehicleTag;

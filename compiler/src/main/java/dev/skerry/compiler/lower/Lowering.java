@@ -1,20 +1,25 @@
 package dev.skerry.compiler.lower;
 
 import dev.skerry.compiler.analysis.FormulationLayout;
+import dev.skerry.compiler.analysis.VehicleLayout;
 import dev.skerry.compiler.milp.LinearExpr;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.MilpBuilder;
 import dev.skerry.compiler.milp.Origin;
+import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.PlanOptions;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.source.SourceRange;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
  * Entry point of the lowering stage: scenario → {@link FormulationLayout} → {@link Milp}. Each
  * piece of the formulation has its own class; this one runs them in order and sets the objective
- * timeWeight·Σ k·Δt·f_k + fuelWeight·Σ Δt·(wx + wy). The scenario is only read.
+ * timeWeight·Σ k·Δt·f_k + fuelWeight·Σ Δt·(wx + wy) (summed over a fleet's vehicles, or with
+ * {@code latest} time the makespan T in place of the arrival sum). The scenario is only read.
  */
 public final class Lowering {
   private Lowering() {}
@@ -44,21 +49,38 @@ public final class Lowering {
 
   public static Lowered lower(FormulationLayout layout) {
     Scenario s = layout.scenario();
-    LoweringContext c = new LoweringContext(new MilpBuilder(s.name()), layout);
-    DynamicsLowering.lower(c);
-    LimitsLowering.lower(c);
-    KeepInLowering.lower(c);
-    ArrivalLowering.lower(c);
-    FuelLowering.lower(c);
-    ClusterLowering.lower(c);
-    ZoneAvoidanceLowering.lower(c);
-    WaypointLowering.lower(c);
+    MilpBuilder builder = new MilpBuilder(s.name());
+    List<LoweringContext> parts = new ArrayList<>();
+    for (VehicleLayout part : layout.vehicles()) {
+      LoweringContext c = new LoweringContext(builder, layout, part);
+      parts.add(c);
+      DynamicsLowering.lower(c);
+      LimitsLowering.lower(c);
+      KeepInLowering.lower(c);
+      ArrivalLowering.lower(c);
+      FuelLowering.lower(c);
+    }
+    ClusterLowering.lower(parts);
+    for (LoweringContext c : parts) {
+      ZoneAvoidanceLowering.lower(c);
+    }
+    WaypointLowering.lower(layout, parts, builder);
+    SeparationLowering.lower(layout.separations(), parts, builder);
+    Variable latest = ArrivalLowering.lowerFleet(layout, parts, builder);
     PlanOptions plan = s.plan();
     LinearExpr objective = new LinearExpr();
-    ArrivalLowering.addCost(c, objective, plan.timeWeight());
-    FuelLowering.addCost(c, objective, plan.fuelWeight());
-    c.builder.minimize(objective);
-    return new Lowered(c.builder.build(), layout, entities(s));
+    if (latest != null) {
+      objective.add(latest, plan.timeWeight());
+    } else {
+      for (LoweringContext c : parts) {
+        ArrivalLowering.addCost(c, objective, plan.timeWeight());
+      }
+    }
+    for (LoweringContext c : parts) {
+      FuelLowering.addCost(c, objective, plan.fuelWeight());
+    }
+    builder.minimize(objective);
+    return new Lowered(builder.build(), layout, entities(s));
   }
 
   private static Map<String, Entity> entities(Scenario s) {

@@ -16,22 +16,22 @@ final class ZoneAvoidanceLowering {
   private ZoneAvoidanceLowering() {}
 
   static void lower(LoweringContext c) {
-    for (AvoidanceLayout.Obstacle o : c.layout.avoidance().obstacles()) {
+    for (AvoidanceLayout.Obstacle o : c.part.avoidance().obstacles()) {
       String prefix = o.isCluster() ? "c" : "";
       for (AvoidanceLayout.Slot s : o.slots()) {
         Variable d = s.relaxBy() >= 0 ? c.done[s.relaxBy()] : null;
         LinearExpr cover = new LinearExpr();
         for (AvoidanceLayout.FaceRow f : s.faces()) {
-          String face = o.tag() + "_f" + f.face() + "_" + s.slot();
+          String face = c.scope + o.tag() + "_f" + f.face() + "_" + s.slot();
           Variable bin = null;
           if (!s.hard()) {
-            bin = c.builder.newBinary("b" + prefix + "_" + face, Origin.of(o.entity(), "avoid-binary", s.slot()));
+            bin = c.builder.newBinary("b" + prefix + "_" + face, c.origin(o.entity(), "avoid-binary", s.slot()));
             cover.add(bin);
           }
           for (int i = 0; i < f.points().length; i++) {
             int p = f.points()[i];
             double m = f.bigM()[i];
-            LinearExpr e = c.position(f.normal(), p);
+            LinearExpr e = c.position(f.normal(), f.nz(), p);
             double rhs = f.offset();
             if (o.isCluster()) {
               e.add(c.clusterBounds[o.cluster()][f.face()], -(f.normal().x() + f.normal().y()));
@@ -49,15 +49,15 @@ final class ZoneAvoidanceLowering {
               rhs -= m;
             }
             c.builder.addGreaterOrEqual((s.hard() ? "hard" : "av") + prefix + "_" + face + "_" + p, e, rhs,
-                Origin.of(o.entity(), role, p));
+                c.origin(o.entity(), role, p));
           }
         }
         if (!s.hard()) {
           if (d != null) {
             cover.add(d);
           }
-          c.builder.addGreaterOrEqual("cov" + prefix + "_" + o.tag() + "_" + s.slot(), cover, 1,
-              Origin.of(o.entity(), "cover", s.slot()));
+          c.builder.addGreaterOrEqual("cov" + prefix + "_" + c.scope + o.tag() + "_" + s.slot(), cover, 1,
+              c.origin(o.entity(), "cover", s.slot()));
         }
       }
     }

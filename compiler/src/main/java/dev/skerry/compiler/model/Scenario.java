@@ -71,9 +71,6 @@ public record Scenario(
       Target t = target(v.target());
       return t == null ? List.of() : List.of(t);
     }
-    if (vehicles.size() == 1) {
-      return targets.isEmpty() ? List.of() : List.of(targets.get(0));
-    }
     List<Target> free = new ArrayList<>();
     for (Target t : targets) {
       boolean named = false;

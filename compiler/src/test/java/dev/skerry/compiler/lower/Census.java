@@ -25,6 +25,7 @@ final class Census {
     long waypoint = 0;
     long assign = 0;
     long clusterAvoid = 0;
+    long separation = 0;
     long continuous = 0;
     for (Variable v : milp.variables()) {
       if (v.type() == VarType.CONTINUOUS) {
@@ -36,6 +37,7 @@ final class Census {
         case "arrive" -> arrival++;
         case "visit" -> waypoint++;
         case "assign" -> assign++;
+        case "separate-binary" -> separation++;
         case "avoid-binary" -> {
           if (v.name().startsWith("bc_")) {
             clusterAvoid++;
@@ -48,7 +50,7 @@ final class Census {
         default -> throw new AssertionError("binary " + v.name() + " has an unexpected role " + role);
       }
     }
-    return new Sizes(box, poly, arrival, waypoint, assign, clusterAvoid, continuous, milp.rowCount(),
+    return new Sizes(box, poly, arrival, waypoint, assign, clusterAvoid, separation, continuous, milp.rowCount(),
         milp.nonZeros());
   }
 }
