@@ -5,14 +5,27 @@ import dev.skerry.compiler.verify.VerifyReport;
 import java.util.List;
 
 /**
- * A closed-loop run: every iteration, the path actually flown, why the loop stopped, the first
- * iteration's predicted path, and the verifier's report on the flown path.
+ * A closed-loop run: every iteration, the paths actually flown (one per vehicle, in the scenario's
+ * order), why the loop stopped, the first iteration's predicted paths, and the verifier's report on
+ * the flown paths.
  */
-public record LoopResult(List<Iteration> iterations, Trajectory flown, Trajectory firstPrediction, Stop stop,
-    double flownTime, double flownFuel, double flownCost, VerifyReport verify) {
+public record LoopResult(List<Iteration> iterations, List<Trajectory> flownPaths, List<Trajectory> firstPredictions,
+    Stop stop, double flownTime, double flownFuel, double flownCost, VerifyReport verify) {
 
   public LoopResult {
     iterations = List.copyOf(iterations);
+    flownPaths = List.copyOf(flownPaths);
+    firstPredictions = firstPredictions == null ? List.of() : List.copyOf(firstPredictions);
+  }
+
+  /** The first vehicle's flown path. */
+  public Trajectory flown() {
+    return flownPaths.get(0);
+  }
+
+  /** The first vehicle's first predicted path, or null when no iteration found a plan. */
+  public Trajectory firstPrediction() {
+    return firstPredictions.isEmpty() ? null : firstPredictions.get(0);
   }
 
   /** Why the loop ended. */

@@ -54,9 +54,9 @@ public final class ShiftedStart {
     String role = v.origin().role();
     Double lastValue = old.get(stem + last);
     switch (role) {
-      case "ux", "uy", "wx", "wy", "arrive", "visit":
+      case "ux", "uy", "uz", "wx", "wy", "wz", "arrive", "visit":
         return 0.0;
-      case "px", "py":
+      case "px", "py", "pz":
         Double velocity = old.get("v" + stem.substring(1) + last);
         return lastValue == null || velocity == null ? null : lastValue + dt * velocity;
       default:
