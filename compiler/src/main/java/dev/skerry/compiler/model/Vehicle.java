@@ -55,6 +55,11 @@ public record Vehicle(
     return new Vehicle(name, dynamics, start, startVelocity, maxSpeed, maxAccel, radius, n, range, vertical, target);
   }
 
+  public Vehicle withName(String newName) {
+    return new Vehicle(newName, dynamics, start, startVelocity, maxSpeed, maxAccel, radius, sides, range, vertical,
+        target);
+  }
+
   public Vehicle withTarget(String targetName) {
     return new Vehicle(name, dynamics, start, startVelocity, maxSpeed, maxAccel, radius, sides, range, vertical,
         targetName);

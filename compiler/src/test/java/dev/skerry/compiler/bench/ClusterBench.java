@@ -92,7 +92,7 @@ public final class ClusterBench {
   }
 
   /** CPU time of this whole process, the solver's native threads included. */
-  private static double cpuSeconds() {
+  static double cpuSeconds() {
     return ProcessHandle.current().info().totalCpuDuration().map(d -> d.toMillis() / 1000.0).orElse(Double.NaN);
   }
 

@@ -1,0 +1,118 @@
+package dev.skerry.compiler.bench;
+
+import dev.skerry.compiler.analysis.Analysis;
+import dev.skerry.compiler.analysis.Sizes;
+import dev.skerry.compiler.check.CheckResult;
+import dev.skerry.compiler.check.DiskLoader;
+import dev.skerry.compiler.check.ScenarioChecker;
+import dev.skerry.compiler.lower.Lowering;
+import dev.skerry.compiler.milp.Milp;
+import dev.skerry.compiler.model.Bounds;
+import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
+import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Target;
+import dev.skerry.compiler.model.Vec2;
+import dev.skerry.compiler.model.Vehicle;
+import dev.skerry.compiler.plan.PlanExtractor;
+import dev.skerry.compiler.solve.Backends;
+import dev.skerry.compiler.solve.SolveMonitor;
+import dev.skerry.compiler.solve.SolveOptions;
+import dev.skerry.compiler.solve.SolveResult;
+import dev.skerry.compiler.source.SourceFile;
+import dev.skerry.compiler.verify.Verifier;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * Fleet benchmark (a main class, not a test): the harbour example with 1 to 4 copies of its skiff,
+ * starting along the west shore, sharing the example's berth and three more on the east side
+ * (assigned by the MILP), 4 m apart at least; each fleet without clusters and with 2 ordered
+ * clusters, all in one run with SCIP at the same gap and time cap. Prints binaries by cause (zones,
+ * separation, arrival), status, wall and CPU time, each as a ratio to the one-vehicle unclustered
+ * case, cost and bound, and whether the verifier accepts the plan (separation included).
+ *
+ * <p>Run from the repository root: {@code mvn -q -B install -DskipTests -pl grammar,compiler &&
+ * mvn -q -B test-compile -pl compiler && java -cp
+ * compiler/target/classes:compiler/target/test-classes:$(cat compiler/target/runtime-classpath.txt)
+ * dev.skerry.compiler.bench.FleetBench [cap-seconds [gap [max-vehicles]]]} (defaults 60 s, 0.005,
+ * 4).
+ */
+public final class FleetBench {
+  private static final Vec2[] STARTS = {new Vec2(6, 8), new Vec2(6, 28), new Vec2(6, 46), new Vec2(6, 62)};
+  private static final Bounds[] EXTRA_BERTHS = {
+      new Bounds(108, 40, 114, 46), new Bounds(108, 22, 114, 28), new Bounds(108, 4, 114, 10)};
+
+  private FleetBench() {}
+
+  public static void main(String[] args) throws Exception {
+    double cap = args.length > 0 ? Double.parseDouble(args[0]) : 60;
+    double gap = args.length > 1 ? Double.parseDouble(args[1]) : 0.005;
+    int most = args.length > 2 ? Integer.parseInt(args[2]) : 4;
+    Path file = Path.of("examples/harbour_survey.skerry").toAbsolutePath().normalize();
+    CheckResult checked = ScenarioChecker.check(SourceFile.of(file, Files.readString(file)),
+        new DiskLoader(file.getParent()));
+    if (checked.scenario() == null) {
+      throw new IllegalStateException("scenario " + file + " did not check: " + checked.diagnostics());
+    }
+    Scenario base = checked.scenario();
+    SolveOptions options = SolveOptions.defaults().withRelativeGap(gap)
+        .withTimeLimit(Duration.ofMillis(Math.round(cap * 1000)));
+    System.out.printf(Locale.ROOT, "# %s: %d zones, horizon %d, SCIP, gap %g, cap %.0f s, %d cores%n",
+        file.getFileName(), base.zones().size(), base.plan().horizon(), gap, cap,
+        Runtime.getRuntime().availableProcessors());
+    System.out.println("| vehicles | clusters | binaries | zone/cluster | separation | arrival | status | wall s"
+        + " | wall ratio | CPU s | CPU ratio | cost | bound | verified |");
+    System.out.println("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
+    double[] first = null;
+    for (int n = 1; n <= Math.min(most, STARTS.length); n++) {
+      for (int clusters : new int[] {0, 2}) {
+        Scenario s = fleet(base, n).withPlan(base.plan().withClusters(clusters, SymmetryRule.ORDERED)
+            .withSeparation(4));
+        double[] row = run(n, clusters, s, options, first);
+        first = first == null ? row : first;
+      }
+    }
+  }
+
+  /** The example with {@code n} skiffs and n berths (the example's first). */
+  static Scenario fleet(Scenario base, int n) {
+    Vehicle skiff = base.vehicle();
+    List<Vehicle> vehicles = new ArrayList<>();
+    List<Target> berths = new ArrayList<>();
+    berths.add(base.target());
+    for (int i = 0; i < n; i++) {
+      vehicles.add(skiff.withStart(STARTS[i], Vec2.ZERO, 0, 0).withTarget(null).withName(skiff.name() + (i + 1)));
+      if (i > 0) {
+        berths.add(new Target("berth_" + (i + 1), new Shape.Box(EXTRA_BERTHS[i - 1]), true, null));
+      }
+    }
+    return base.withVehiclesAndTargets(vehicles, berths);
+  }
+
+  private static double[] run(int n, int clusters, Scenario s, SolveOptions options, double[] first) {
+    Milp milp = Lowering.lower(s);
+    Sizes sizes = Analysis.sizes(s);
+    double cpu0 = ClusterBench.cpuSeconds();
+    SolveResult r = Backends.standard().choose("scip", milp).backend().solve(milp, options, SolveMonitor.NONE);
+    double cpu = ClusterBench.cpuSeconds() - cpu0;
+    double wall = r.wallTime().toMillis() / 1000.0;
+    String verified = "-";
+    if (r.status().hasSolution()) {
+      verified = Verifier.verify(s, PlanExtractor.trajectories(s, milp, r.values())).ok() ? "yes" : "NO";
+    }
+    double[] base = first == null ? new double[] {wall, cpu} : first;
+    System.out.printf(Locale.ROOT,
+        "| %d | %d | %,d | %,d | %,d | %,d | %-17s | %7.2f | %6.1f× | %7.2f | %6.1f× | %9.3f | %9.3f | %s |%n",
+        n, clusters, sizes.binaries(),
+        sizes.zoneBoxBinaries() + sizes.zonePolygonBinaries() + sizes.clusterAvoidanceBinaries()
+            + sizes.clusterAssignmentBinaries(),
+        sizes.separationBinaries(), sizes.arrivalBinaries(), r.status(), wall, wall / Math.max(base[0], 1e-3), cpu,
+        cpu / Math.max(base[1], 1e-3), r.objective(), r.bestBound(), verified);
+    return new double[] {wall, cpu};
+  }
+}
