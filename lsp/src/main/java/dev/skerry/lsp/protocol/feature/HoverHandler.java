@@ -93,7 +93,33 @@ public final class HoverHandler {
     lines.add("- acceleration limit: " + Format.number(v.maxAccel()) + " m/s²");
     lines.add("- radius: " + Format.number(v.radius()) + " m (every zone grows by it)");
     lines.add("- limits approximated by polygons of " + v.sides() + " sides");
+    if (v.vertical() != null) {
+      Vehicle.Vertical vt = v.vertical();
+      lines.add("- start altitude: " + Format.number(vt.start()) + " m, climb rate " + Format.number(vt.startRate())
+          + " m/s");
+      lines.add("- climb limit: " + Format.number(vt.maxClimb()) + " m/s, vertical acceleration limit "
+          + Format.number(vt.maxClimbAccel()) + " m/s²");
+      if (vt.limits() != null) {
+        lines.add("- altitude limits: " + span(vt.limits()));
+      }
+    }
+    if (scenario.vehicles().size() > 1 || scenario.targets().size() > 1) {
+      lines.add(v.target() != null ? "- target: `" + v.target() + "`"
+          : "- target: assigned by the plan among " + names(scenario.candidateTargets(v)));
+    }
     return String.join("\n", lines);
+  }
+
+  private static String names(List<dev.skerry.compiler.model.Target> targets) {
+    List<String> out = new ArrayList<>();
+    for (dev.skerry.compiler.model.Target t : targets) {
+      out.add("`" + t.name() + "`");
+    }
+    return String.join(", ", out);
+  }
+
+  private static String span(dev.skerry.compiler.model.Span s) {
+    return Format.number(s.lo()) + " … " + Format.number(s.hi()) + " m";
   }
 
   private static String zone(Decl.ZoneDecl decl, Scenario scenario, dev.skerry.lsp.analysis.SizeEstimator.PlanSizes sizes) {
@@ -105,10 +131,17 @@ public final class HoverHandler {
       return title + "\n\n" + NOT_CHECKED;
     }
     Vehicle v = scenario.vehicle();
+    for (Vehicle other : scenario.vehicles()) {
+      v = other.radius() > v.radius() ? other : v;
+    }
     Shape grown = zone.shape().inflate(v.radius());
     List<String> lines = new ArrayList<>();
     lines.add(title + ", in SI units:");
     lines.add("- as written: " + bounds(zone.shape().bounds()));
+    if (scenario.threeD()) {
+      lines.add(zone.altitude() == null ? "- altitude: every altitude (a column)"
+          : "- altitude: " + span(zone.altitude()) + " (floor and ceiling)");
+    }
     lines.add("- grown by the radius of `" + v.name() + "` (" + Format.number(v.radius()) + " m): "
         + bounds(grown.bounds()));
     if (grown instanceof Shape.Polygon p) {
@@ -133,8 +166,12 @@ public final class HoverHandler {
     if (scenario == null) {
       return title + "\n\n" + NOT_CHECKED;
     }
-    return title + (scenario.target().atRest() ? ", arrive at rest" : "") + ", in SI units:\n- "
-        + bounds(scenario.target().region().bounds());
+    dev.skerry.compiler.model.Target t = scenario.target(decl.name().text());
+    if (t == null) {
+      return title + "\n\n" + NOT_CHECKED;
+    }
+    return title + (t.atRest() ? ", arrive at rest" : "") + ", in SI units:\n- " + bounds(t.region().bounds())
+        + (t.altitude() != null ? "\n- altitude: " + span(t.altitude()) : "");
   }
 
   private static String waypoint(Decl.WaypointDecl decl, Scenario scenario) {
@@ -160,6 +197,14 @@ public final class HoverHandler {
     lines.add("- fewest steps that can reach `" + scenario.target().name() + "`: " + Hints.minimumSteps(scenario));
     lines.add("- clusters: " + (p.clustered() ? p.clusters() + " (" + p.symmetry().keyword() + ")" : "none, zones avoided one by one"));
     lines.add("- guard " + (p.guard() ? "on" : "off") + ", pruning " + (p.pruning() ? "on" : "off"));
+    if (scenario.threeD()) {
+      lines.add("- 3-D: altitude planned with the plan view");
+    }
+    if (scenario.fleet()) {
+      lines.add("- fleet of " + scenario.vehicles().size() + " vehicles, " + (p.separation() > 0
+          ? "at least " + Format.number(p.separation()) + " m apart" : "kept apart by the sum of their radii")
+          + "; time is " + (p.latestArrival() ? "the latest arrival" : "the sum of arrival times"));
+    }
     return String.join("\n", lines);
   }
 
