@@ -136,7 +136,7 @@ final class SolveCommand implements Callable<Integer> {
         String title = checked.scenario().name() + " — " + result.solve().backendId() + ", "
             + result.solve().status().name().toLowerCase(Locale.ROOT);
         if (svg != null) {
-          AtomicFiles.write(svg, SvgPlot.render(checked.scenario(), result.trajectory(), result.clusters(), title));
+          AtomicFiles.write(svg, SvgPlot.renderPlan(checked.scenario(), result.trajectories(), result.clusters(), title));
         }
         if (csv != null) {
           AtomicFiles.write(csv, PlanOutputs.csv(result));

@@ -4,14 +4,21 @@ import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import dev.skerry.compiler.check.Format;
+import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.plan.ClusterBox;
 import dev.skerry.compiler.plan.PlanResult;
 import dev.skerry.compiler.plan.Sample;
+import dev.skerry.compiler.plan.Trajectory;
 import dev.skerry.compiler.solve.SolveResult;
+import dev.skerry.compiler.verify.Verifier;
 import dev.skerry.compiler.verify.Violation;
 import java.util.Locale;
 
-/** A plan as text for people, CSV for spreadsheets and JSON for programs. */
+/**
+ * A plan as text for people, CSV for spreadsheets and JSON for programs. Every vehicle's path is
+ * given (CSV: one row per vehicle and step; JSON: the {@code vehicles} list; the first vehicle also
+ * as {@code plan}); a 3-D plan adds altitude, climb rate and vertical acceleration.
+ */
 public final class PlanOutputs {
   public static final String CAUTION = "Planning aid only, not certified guidance: check the plan against local aviation"
       + " or maritime rules, your operator's procedures and licensed practice; the radius margin is your choice.";
@@ -40,8 +47,19 @@ public final class PlanOutputs {
     if (!r.hasPlan()) {
       return b.toString();
     }
-    b.append(String.format(Locale.ROOT, "objective: %s (arrival %s s at step %d, fuel %s m/s)%n",
-        Format.number(s.objective()), Format.number(r.timeCost()), r.trajectory().arrival(), Format.number(r.fuelCost())));
+    if (r.trajectories().size() == 1) {
+      b.append(String.format(Locale.ROOT, "objective: %s (arrival %s s at step %d, fuel %s m/s)%n",
+          Format.number(s.objective()), Format.number(r.timeCost()), r.trajectory().arrival(), Format.number(r.fuelCost())));
+    } else {
+      b.append(String.format(Locale.ROOT, "objective: %s (%s %s s, fuel %s m/s, %d vehicles)%n",
+          Format.number(s.objective()), r.scenario() != null && r.scenario().plan().latestArrival() ? "latest arrival"
+              : "arrival times summed", Format.number(r.timeCost()), Format.number(r.fuelCost()), r.trajectories().size()));
+      for (Trajectory t : r.trajectories()) {
+        String target = targetName(r, t);
+        b.append(String.format(Locale.ROOT, "  %s: arrival %s s at step %d%s, fuel %s m/s%n", t.vehicle(),
+            Format.number(t.arrivalTime()), t.arrival(), target == null ? "" : " in " + target, Format.number(t.fuel())));
+      }
+    }
     for (ClusterBox c : r.clusters()) {
       b.append(String.format(Locale.ROOT, "cluster %s: (%s, %s) to (%s, %s) holds %s%n", c.name(),
           Format.number(c.box().xmin()), Format.number(c.box().ymin()), Format.number(c.box().xmax()),
@@ -52,6 +70,10 @@ public final class PlanOutputs {
               + " inside the area, within limits (speed %s, accel %s of the limit)%n",
           r.verify().segmentsChecked(), Format.number(r.verify().minClearance()),
           percent(r.verify().speedExcess()), percent(r.verify().accelExcess())));
+      if (r.verify().hasPairs()) {
+        b.append(String.format(Locale.ROOT, "separated: every pair of vehicles keeps its distance while both fly"
+            + " (closest %s m beyond it)%n", Format.number(r.verify().minSeparation())));
+      }
     } else {
       b.append("VERIFICATION FAILED: ").append(r.verify().violations().size()).append(" violation(s)\n");
       for (Violation v : r.verify().violations()) {
@@ -66,14 +88,58 @@ public final class PlanOutputs {
     return String.format(Locale.ROOT, "%.1f %%", 100 * (1 + excess));
   }
 
+  /** The target a trajectory ends in, by name (null when the scenario has none). */
+  private static String targetName(PlanResult r, Trajectory t) {
+    if (t.target() != null || r.scenario() == null) {
+      return t.target();
+    }
+    Target target = Verifier.targetOf(r.scenario(), t);
+    return target == null ? null : target.name();
+  }
+
+  private static boolean threeD(PlanResult r) {
+    return r.scenario() != null && r.scenario().threeD();
+  }
+
+  /** One row per vehicle and flown step; in 3-D also altitude, climb rate and vertical acceleration. */
   public static String csv(PlanResult r) {
-    StringBuilder b = new StringBuilder("vehicle,step,time_s,x_m,y_m,vx_m_per_s,vy_m_per_s,ax_m_per_s2,ay_m_per_s2\n");
-    for (Sample s : r.trajectory().flown()) {
-      b.append(r.trajectory().vehicle()).append(',').append(s.step()).append(',').append(s.time()).append(',')
-          .append(s.position().x()).append(',').append(s.position().y()).append(',').append(s.velocity().x()).append(',')
-          .append(s.velocity().y()).append(',').append(s.accel().x()).append(',').append(s.accel().y()).append('\n');
+    boolean d3 = threeD(r);
+    StringBuilder b = new StringBuilder("vehicle,step,time_s,x_m,y_m,vx_m_per_s,vy_m_per_s,ax_m_per_s2,ay_m_per_s2"
+        + (d3 ? ",z_m,vz_m_per_s,az_m_per_s2" : "") + "\n");
+    for (Trajectory t : r.trajectories()) {
+      for (Sample s : t.flown()) {
+        b.append(t.vehicle()).append(',').append(s.step()).append(',').append(s.time()).append(',')
+            .append(s.position().x()).append(',').append(s.position().y()).append(',').append(s.velocity().x()).append(',')
+            .append(s.velocity().y()).append(',').append(s.accel().x()).append(',').append(s.accel().y());
+        if (d3) {
+          b.append(',').append(s.altitude()).append(',').append(s.climb()).append(',').append(s.climbAccel());
+        }
+        b.append('\n');
+      }
     }
     return b.toString();
+  }
+
+  private static JsonArray samples(Trajectory t, boolean d3) {
+    JsonArray samples = new JsonArray();
+    for (Sample p : t.flown()) {
+      JsonObject j = new JsonObject();
+      j.addProperty("step", p.step());
+      j.addProperty("t", p.time());
+      j.addProperty("x", p.position().x());
+      j.addProperty("y", p.position().y());
+      j.addProperty("vx", p.velocity().x());
+      j.addProperty("vy", p.velocity().y());
+      j.addProperty("ax", p.accel().x());
+      j.addProperty("ay", p.accel().y());
+      if (d3) {
+        j.addProperty("z", p.altitude());
+        j.addProperty("vz", p.climb());
+        j.addProperty("az", p.climbAccel());
+      }
+      samples.add(j);
+    }
+    return samples;
   }
 
   public static JsonObject json(PlanResult r) {
@@ -108,24 +174,29 @@ public final class PlanOutputs {
     cost.addProperty("fuel", r.fuelCost());
     cost.addProperty("arrivalStep", r.trajectory().arrival());
     o.add("cost", cost);
-    JsonArray samples = new JsonArray();
-    for (Sample p : r.trajectory().flown()) {
-      JsonObject j = new JsonObject();
-      j.addProperty("step", p.step());
-      j.addProperty("t", p.time());
-      j.addProperty("x", p.position().x());
-      j.addProperty("y", p.position().y());
-      j.addProperty("vx", p.velocity().x());
-      j.addProperty("vy", p.velocity().y());
-      j.addProperty("ax", p.accel().x());
-      j.addProperty("ay", p.accel().y());
-      samples.add(j);
-    }
+    boolean d3 = threeD(r);
     JsonObject plan = new JsonObject();
     plan.addProperty("vehicle", r.trajectory().vehicle());
     plan.addProperty("step", r.trajectory().step());
-    plan.add("samples", samples);
+    plan.add("samples", samples(r.trajectory(), d3));
     o.add("plan", plan);
+    o.addProperty("dimensions", d3 ? 3 : 2);
+    JsonArray vehicles = new JsonArray();
+    for (Trajectory t : r.trajectories()) {
+      JsonObject j = new JsonObject();
+      j.addProperty("vehicle", t.vehicle());
+      String target = targetName(r, t);
+      if (target != null) {
+        j.addProperty("target", target);
+      }
+      j.addProperty("step", t.step());
+      j.addProperty("arrivalStep", t.arrival());
+      j.addProperty("arrivalSeconds", t.arrivalTime());
+      j.addProperty("fuel", t.fuel());
+      j.add("samples", samples(t, d3));
+      vehicles.add(j);
+    }
+    o.add("vehicles", vehicles);
     JsonArray clusters = new JsonArray();
     for (ClusterBox c : r.clusters()) {
       JsonObject j = new JsonObject();
@@ -145,6 +216,9 @@ public final class PlanOutputs {
     verify.addProperty("minClearance", r.verify().minClearance());
     verify.addProperty("speedRatio", 1 + r.verify().speedExcess());
     verify.addProperty("accelRatio", 1 + r.verify().accelExcess());
+    if (r.verify().hasPairs()) {
+      verify.addProperty("minSeparation", r.verify().minSeparation());
+    }
     JsonArray violations = new JsonArray();
     for (Violation v : r.verify().violations()) {
       JsonObject j = new JsonObject();
