@@ -85,7 +85,7 @@ final class RunCommand implements Callable<Integer> {
     LoopOutputs.Run run = new LoopOutputs.Run(s.name(), r);
     try {
       if (svg != null) {
-        AtomicFiles.write(svg, SvgPlot.render(s, r.flown(), r.firstPrediction(),
+        AtomicFiles.write(svg, SvgPlot.renderLoop(s, r.flownPaths(), r.firstPredictions(),
             r.iterations().isEmpty() ? List.of() : r.iterations().get(0).clusters(), s.name() + " — closed loop"));
       }
       if (json != null) {

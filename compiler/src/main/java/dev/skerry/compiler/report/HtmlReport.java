@@ -44,7 +44,7 @@ public final class HtmlReport {
       LoopResult r = run.result();
       b.append("<h2>").append(esc(run.label())).append("</h2>\n<div class=\"run\">\n");
       var clusters = r.iterations().isEmpty() ? List.<dev.skerry.compiler.plan.ClusterBox>of() : r.iterations().get(0).clusters();
-      String svg = SvgPlot.render(s, r.flown(), r.firstPrediction(), clusters, run.label() + ": flown (solid) and first"
+      String svg = SvgPlot.renderLoop(s, r.flownPaths(), r.firstPredictions(), clusters, run.label() + ": flown (solid) and first"
           + " prediction (dashed)");
       b.append("<div>").append(svg.substring(svg.indexOf("<svg"))).append("</div>\n");
       b.append("<div>").append(chart(run)).append("</div>\n</div>\n");

@@ -3,6 +3,7 @@ package dev.skerry.compiler.report;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import dev.skerry.compiler.check.Format;
+import dev.skerry.compiler.plan.Trajectory;
 import dev.skerry.compiler.sim.Iteration;
 import dev.skerry.compiler.sim.LoopResult;
 import dev.skerry.compiler.verify.Violation;
@@ -24,14 +25,22 @@ public final class LoopOutputs {
     if (!r.iterations().isEmpty() && Double.isFinite(r.iterations().get(0).predictedTotal())) {
       b.append("first prediction: ").append(Format.number(r.iterations().get(0).predictedTotal())).append('\n');
     }
+    if (r.flownPaths().size() > 1) {
+      for (Trajectory t : r.flownPaths()) {
+        b.append(String.format(Locale.ROOT, "  %s: %s after %d steps (%s s)%n", t.vehicle(),
+            t.target() == null ? "flew" : (r.stop() == LoopResult.Stop.ARRIVED ? "reached " : "heading for ") + t.target(), t.arrival(), Format.number(t.arrivalTime())));
+      }
+    }
     b.append(String.format(Locale.ROOT, "compute: %.2f s in all, mean %.3f s, worst %.3f s per iteration; largest model"
         + " %,d binaries%n", r.totalSeconds(), r.meanSeconds(), r.worstSeconds(), r.largestBinaries()));
     long fallbacks = r.iterations().stream().filter(Iteration::fallback).count();
     if (fallbacks > 0) {
       b.append(fallbacks).append(" iteration(s) found no plan; the previous plan's next input was flown instead\n");
     }
-    b.append(r.verify().ok() ? "verified: the flown path is clear of every zone and within limits\n"
-        : "VERIFICATION FAILED on the flown path:\n");
+    boolean fleet = r.flownPaths().size() > 1;
+    b.append(r.verify().ok() ? (fleet ? "verified: the flown paths are clear of every zone, of each other and within"
+        + " limits\n" : "verified: the flown path is clear of every zone and within limits\n")
+        : "VERIFICATION FAILED on the flown path" + (fleet ? "s" : "") + ":\n");
     for (Violation v : r.verify().violations()) {
       b.append("  ").append(v.kind().word()).append(": ").append(v.message()).append('\n');
     }
@@ -75,6 +84,19 @@ public final class LoopOutputs {
     o.addProperty("time", r.flownTime());
     o.addProperty("fuel", r.flownFuel());
     o.addProperty("verified", r.verify().ok());
+    JsonArray vehicles = new JsonArray();
+    for (Trajectory t : r.flownPaths()) {
+      JsonObject v = new JsonObject();
+      v.addProperty("vehicle", t.vehicle());
+      if (t.target() != null) {
+        v.addProperty("target", t.target());
+      }
+      v.addProperty("steps", t.arrival());
+      v.addProperty("seconds", t.arrivalTime());
+      v.addProperty("fuel", t.fuel());
+      vehicles.add(v);
+    }
+    o.add("vehicles", vehicles);
     JsonArray its = new JsonArray();
     for (Iteration it : r.iterations()) {
       JsonObject j = new JsonObject();

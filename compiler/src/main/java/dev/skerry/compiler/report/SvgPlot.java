@@ -77,21 +77,28 @@ public final class SvgPlot {
   }
 
   public static String render(Scenario scenario, Trajectory path, List<ClusterBox> clusters, String title) {
-    return new SvgPlot(scenario).draw(path == null ? List.of() : List.of(path), null,
+    return new SvgPlot(scenario).draw(path == null ? List.of() : List.of(path), List.of(),
         clusters == null ? List.of() : clusters, title);
   }
 
   /** The flown path with, dashed, the path predicted by the first plan. */
   public static String render(Scenario scenario, Trajectory flown, Trajectory predicted, List<ClusterBox> clusters,
       String title) {
-    return new SvgPlot(scenario).draw(flown == null ? List.of() : List.of(flown), predicted,
+    return new SvgPlot(scenario).draw(flown == null ? List.of() : List.of(flown),
+        predicted == null ? List.of() : List.of(predicted), clusters == null ? List.of() : clusters, title);
+  }
+
+  /** Every vehicle's flown path with, dashed in the same hue, its path predicted by the first plan. */
+  public static String renderLoop(Scenario scenario, List<Trajectory> flown, List<Trajectory> predicted,
+      List<ClusterBox> clusters, String title) {
+    return new SvgPlot(scenario).draw(flown == null ? List.of() : flown, predicted == null ? List.of() : predicted,
         clusters == null ? List.of() : clusters, title);
   }
 
   /** Every vehicle's path (one per vehicle, the scenario's order), each in its own hue. */
   public static String renderPlan(Scenario scenario, List<Trajectory> paths, List<ClusterBox> clusters, String title) {
-    return new SvgPlot(scenario).draw(paths == null ? List.of() : paths, null, clusters == null ? List.of() : clusters,
-        title);
+    return new SvgPlot(scenario).draw(paths == null ? List.of() : paths, List.of(),
+        clusters == null ? List.of() : clusters, title);
   }
 
   /** The hue of the i-th vehicle's path. */
@@ -119,7 +126,8 @@ public final class SvgPlot {
     return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
   }
 
-  private String draw(List<Trajectory> paths, Trajectory predicted, List<ClusterBox> clusters, String title) {
+  private String draw(List<Trajectory> paths, List<Trajectory> predictions, List<ClusterBox> clusters,
+      String title) {
     multi = paths.size() > 1 || s.fleet() || s.targets().size() > 1;
     int height = plotHeight + 2 * MARGIN + 40 + (s.threeD() ? ELEV_GAP + ELEV : 0);
     out.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
@@ -192,13 +200,17 @@ public final class SvgPlot {
       out.append("<g class=\"waypoint\">").append(shape(new Shape.Box(w.region()), "none", TARGET, "1.5", "2 2"))
           .append("</g>\n");
     }
-    if (predicted != null) {
-      out.append("<g id=\"predicted\"><polyline fill=\"none\" stroke=\"").append(PATH)
-          .append("\" stroke-width=\"1.5\" stroke-dasharray=\"5 4\" stroke-opacity=\"0.6\" points=\"");
-      for (Sample p : predicted.flown()) {
-        out.append(f(x(p.position().x()))).append(',').append(f(y(p.position().y()))).append(' ');
+    if (!predictions.isEmpty()) {
+      out.append("<g id=\"predicted\">");
+      for (int i = 0; i < predictions.size(); i++) {
+        out.append("<polyline fill=\"none\" stroke=\"").append(multi ? vehicleHue(i) : PATH)
+            .append("\" stroke-width=\"1.5\" stroke-dasharray=\"5 4\" stroke-opacity=\"0.6\" points=\"");
+        for (Sample p : predictions.get(i).flown()) {
+          out.append(f(x(p.position().x()))).append(',').append(f(y(p.position().y()))).append(' ');
+        }
+        out.append("\"/>");
       }
-      out.append("\"/></g>\n");
+      out.append("</g>\n");
     }
     if (!multi) {
       if (!paths.isEmpty()) {
@@ -212,9 +224,9 @@ public final class SvgPlot {
     }
     scaleBar();
     if (s.threeD()) {
-      elevation(paths, predicted);
+      elevation(paths, predictions);
     }
-    legend(paths, !used.isEmpty(), predicted != null);
+    legend(paths, !used.isEmpty(), !predictions.isEmpty());
     out.append("<text x=\"").append(MARGIN).append("\" y=\"").append(height - 12).append("\" font-size=\"10\" fill=\"#555\">")
         .append("Planning aid, not certified guidance: check local aviation or maritime rules and licensed practice; ")
         .append("the radius margin is the user's choice.</text>\n");
@@ -290,7 +302,7 @@ public final class SvgPlot {
   }
 
   /** Altitude range of the side elevation: everything bounded that is drawn, padded a little. */
-  private void altitudeRange(List<Trajectory> paths, Trajectory predicted) {
+  private void altitudeRange(List<Trajectory> paths, List<Trajectory> predictions) {
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
     List<Span> spans = new ArrayList<>();
@@ -307,9 +319,7 @@ public final class SvgPlot {
       }
     }
     List<Trajectory> all = new ArrayList<>(paths);
-    if (predicted != null) {
-      all.add(predicted);
-    }
+    all.addAll(predictions);
     for (Trajectory p : all) {
       for (Sample q : p.flown()) {
         spans.add(new Span(q.altitude(), q.altitude()));
@@ -351,8 +361,8 @@ public final class SvgPlot {
   }
 
   /** The side elevation below the plan view: x across (the plan's scale), altitude up. */
-  private void elevation(List<Trajectory> paths, Trajectory predicted) {
-    altitudeRange(paths, predicted);
+  private void elevation(List<Trajectory> paths, List<Trajectory> predictions) {
+    altitudeRange(paths, predictions);
     elevTop = MARGIN + plotHeight + ELEV_GAP;
     double left = x(view.xmin());
     double right = x(view.xmax());
@@ -395,10 +405,10 @@ public final class SvgPlot {
       out.append(band(wb.xmin(), wb.xmax(), w.altitude(), "class=\"waypoint-band\" fill=\"none\" stroke=\"" + TARGET
           + "\" stroke-dasharray=\"2 2\""));
     }
-    if (predicted != null) {
-      out.append("<polyline class=\"elevation-predicted\" fill=\"none\" stroke=\"").append(PATH)
+    for (int i = 0; i < predictions.size(); i++) {
+      out.append("<polyline class=\"elevation-predicted\" fill=\"none\" stroke=\"").append(multi ? vehicleHue(i) : PATH)
           .append("\" stroke-width=\"1.5\" stroke-dasharray=\"5 4\" stroke-opacity=\"0.6\" points=\"");
-      for (Sample q : predicted.flown()) {
+      for (Sample q : predictions.get(i).flown()) {
         out.append(f(x(q.position().x()))).append(',').append(f(z(q.altitude()))).append(' ');
       }
       out.append("\"/>\n");
