@@ -578,6 +578,12 @@ final class Checker {
       PlanProp.Term plainTime = null;
       PlanProp.Term latestTime = null;
       for (PlanProp.Term t : m.terms()) {
+        if (t.latest() && t.what().equals("fuel") && t.weight() == null
+            && symbols.lookup("latest") != null && symbols.lookup("latest").kind() == Symbol.Kind.CONSTANT) {
+          // `latest fuel` with a constant named `latest`: the constant is the weight.
+          SourceRange at = new SourceRange(t.range().source(), t.range().start(), t.range().start() + "latest".length());
+          t = new PlanProp.Term(new Expr.Ref(new Name("latest", at)), "fuel", false, t.range());
+        }
         if (t.latest() && t.what().equals("fuel")) {
           sink.report(Code.UNKNOWN_OPTION, t.range(), "`latest` goes with `time` only (the latest arrival of the"
               + " fleet); fuel is always summed over the vehicles");
