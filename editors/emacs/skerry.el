@@ -42,9 +42,9 @@
 (defconst skerry--properties
   '("dynamics" "start" "speed" "accel" "radius" "sides" "velocity" "moving" "heading"
     "step" "horizon" "minimize" "clusters" "closed_loop" "solver" "time_limit" "gap"
-    "threads" "guard" "pruning"))
+    "threads" "guard" "pruning" "climb" "altitude" "dimensions" "separation"))
 (defconst skerry--words '("box" "polygon" "point" "at" "to" "within" "max"))
-(defconst skerry--values '("on" "off" "rest" "time" "fuel"))
+(defconst skerry--values '("on" "off" "rest" "time" "fuel" "latest"))
 
 (defconst skerry--keywords
   (append skerry--declarations skerry--properties skerry--words skerry--values)

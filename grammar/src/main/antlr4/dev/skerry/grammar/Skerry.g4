@@ -46,6 +46,15 @@ vehicleItem
     | ACCEL MAX expr                                           # accelItem
     | RADIUS expr                                              # radiusItem
     | SIDES expr                                               # sidesItem
+    | CLIMB MAX expr                                           # climbItem
+    | CLIMB ACCEL MAX expr                                     # climbAccelItem
+    | altitudeRange                                            # altitudeItem
+    | TARGET name                                              # vehicleTargetItem
+    ;
+
+// A floor and a ceiling: `altitude 0 m to 60 m` (3-D scenarios only).
+altitudeRange
+    : ALTITUDE expr TO expr
     ;
 
 startMotion
@@ -80,8 +89,8 @@ waypointDecl
     ;
 
 shape
-    : BOX point TO point                                       # boxShape
-    | POLYGON point+                                           # polygonShape
+    : BOX point TO point altitudeRange?                        # boxShape
+    | POLYGON point+ altitudeRange?                            # polygonShape
     ;
 
 planDecl
@@ -98,10 +107,15 @@ planItem
     | GUARD onOff                                              # guardItem
     | PRUNING onOff                                            # pruningItem
     | SIDES expr                                               # planSidesItem
+    | DIMENSIONS expr                                          # dimensionsItem
+    | SEPARATION expr                                          # separationItem
     ;
 
+// `latest` alone comes first, so `latest time` is never read as a constant named `latest`.
 objectiveTerm
-    : simpleValue? (TIME | FUEL)
+    : LATEST (TIME | FUEL)
+    | simpleValue LATEST? (TIME | FUEL)
+    | (TIME | FUEL)
     ;
 
 // A value that cannot swallow the word after it as a unit: `clusters 2 ordered`, `0.1 fuel`.
@@ -148,6 +162,7 @@ name
     | BOX | POLYGON | POINT | TIME | FUEL | REST | TO | ON | OFF | MAX | GAP | THREADS
     | STEP | SPEED | ACCEL | RADIUS | SIDES | START | GUARD | PRUNING | HEADING | MOVING
     | VELOCITY | WITHIN | DYNAMICS | AT
+    | CLIMB | ALTITUDE | DIMENSIONS | SEPARATION | LATEST
     ;
 
 SCENARIO    : 'scenario';
@@ -191,6 +206,11 @@ THREADS     : 'threads';
 GUARD       : 'guard';
 PRUNING     : 'pruning';
 ON          : 'on';
+CLIMB       : 'climb';
+ALTITUDE    : 'altitude';
+DIMENSIONS  : 'dimensions';
+SEPARATION  : 'separation';
+LATEST      : 'latest';
 OFF         : 'off';
 
 // Compound units are single tokens (no spaces inside): m/s, km/h, m/s^2, m/s2.

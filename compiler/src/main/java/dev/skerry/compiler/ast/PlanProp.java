@@ -31,8 +31,12 @@ public sealed interface PlanProp {
     }
   }
 
-  /** {@code weight? time|fuel}; weight null means 1. */
-  record Term(Expr weight, String what, SourceRange range) {}
+  /** {@code weight? latest? time|fuel}; weight null means 1; {@code latest} asks for the latest arrival. */
+  record Term(Expr weight, String what, boolean latest, SourceRange range) {
+    public Term(Expr weight, String what, SourceRange range) {
+      this(weight, what, false, range);
+    }
+  }
 
   record Clusters(Expr count, Name rule, SourceRange range) implements PlanProp {
     public String keyword() {
@@ -67,6 +71,20 @@ public sealed interface PlanProp {
   record Sides(Expr count, SourceRange range) implements PlanProp {
     public String keyword() {
       return "sides";
+    }
+  }
+
+  /** {@code dimensions 2|3}. */
+  record Dimensions(Expr count, SourceRange range) implements PlanProp {
+    public String keyword() {
+      return "dimensions";
+    }
+  }
+
+  /** {@code separation LENGTH}: least centre distance between two vehicles. */
+  record Separation(Expr value, SourceRange range) implements PlanProp {
+    public String keyword() {
+      return "separation";
     }
   }
 }

@@ -46,6 +46,34 @@ public sealed interface VehicleProp {
     }
   }
 
+  /** {@code climb max SPEED}: the climb-rate limit of a 3-D vehicle. */
+  record Climb(Expr max, SourceRange range) implements VehicleProp {
+    public String keyword() {
+      return "climb max";
+    }
+  }
+
+  /** {@code climb accel max ACCEL}: the vertical acceleration limit. */
+  record ClimbAccel(Expr max, SourceRange range) implements VehicleProp {
+    public String keyword() {
+      return "climb accel";
+    }
+  }
+
+  /** {@code altitude LO to HI}: the vehicle's own altitude limits. */
+  record Altitude(ShapeNode.AltitudeNode span, SourceRange range) implements VehicleProp {
+    public String keyword() {
+      return "altitude";
+    }
+  }
+
+  /** {@code target NAME}: the target this vehicle must reach. */
+  record TargetRef(Name target, SourceRange range) implements VehicleProp {
+    public String keyword() {
+      return "target";
+    }
+  }
+
   /** How the vehicle moves at the start. */
   sealed interface Motion {
     record AtRest(SourceRange range) implements Motion {}

@@ -2,8 +2,10 @@ package dev.skerry.compiler.check;
 
 import dev.skerry.compiler.ast.Decl;
 import dev.skerry.compiler.ast.Name;
+import dev.skerry.compiler.ast.Expr;
 import dev.skerry.compiler.ast.PlanProp;
 import dev.skerry.compiler.ast.ScenarioFile;
+import dev.skerry.compiler.ast.ShapeNode;
 import dev.skerry.compiler.ast.VehicleProp;
 import dev.skerry.compiler.diag.Code;
 import dev.skerry.compiler.diag.Diagnostic;
@@ -12,6 +14,7 @@ import dev.skerry.compiler.model.Area;
 import dev.skerry.compiler.model.PlanOptions;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Span;
 import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
@@ -26,6 +29,7 @@ import dev.skerry.compiler.units.Units;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -61,6 +65,16 @@ final class Checker {
     return planRanges;
   }
 
+  /** 2 (plan view) or 3 (with altitude), from the plan's `dimensions` line, read before anything else. */
+  private int dimensions = 2;
+
+  /** Where each vehicle's `target NAME` line is written. */
+  private final Map<String, SourceRange> targetLines = new HashMap<>();
+
+  private boolean threeD() {
+    return dimensions == 3;
+  }
+
   Scenario check(ScenarioFile main, List<Includes.Placed> decls) {
     declareAll(decls);
     for (Includes.Placed p : decls) {
@@ -68,6 +82,7 @@ final class Checker {
         units(p.file().source(), u);
       }
     }
+    boolean dimensionsOk = readDimensions(decls);
     String name = null;
     List<Vehicle> vehicles = new ArrayList<>();
     List<Area> areas = new ArrayList<>();
@@ -93,18 +108,19 @@ final class Checker {
       } else if (decl instanceof Decl.VehicleDecl v) {
         complete &= add(vehicles, vehicle(v, units));
       } else if (decl instanceof Decl.AreaDecl a) {
-        Shape shape = shapes.shape(a.shape(), units, "area `" + a.name().text() + "`");
-        complete &= add(areas, shape == null ? null : new Area(a.name().text(), shape, a.name().range()));
+        complete &= add(areas, area(a, units));
         if (areas.size() > 1) {
           sink.report(Code.DUPLICATE_DECLARATION, a.range(), "the scenario has one keep-in area; `"
               + areas.get(0).name() + "` is already declared", related("the first area", areas.get(0).range()));
         }
       } else if (decl instanceof Decl.ZoneDecl z) {
-        Shape shape = shapes.shape(z.shape(), units, "zone `" + z.name().text() + "`");
-        complete &= add(zones, shape == null ? null : new Zone(z.name().text(), shape, z.name().range()));
+        Shapes.Solid solid = shapes.solid(z.shape(), units, "zone `" + z.name().text() + "`", dimensions);
+        complete &= add(zones, solid == null ? null
+            : new Zone(z.name().text(), solid.shape(), z.name().range(), solid.altitude()));
       } else if (decl instanceof Decl.TargetDecl t) {
-        Shape shape = shapes.shape(t.shape(), units, "target `" + t.name().text() + "`");
-        complete &= add(targets, shape == null ? null : new Target(t.name().text(), shape, t.atRest(), t.name().range()));
+        Shapes.Solid solid = shapes.solid(t.shape(), units, "target `" + t.name().text() + "`", dimensions);
+        complete &= add(targets, solid == null ? null
+            : new Target(t.name().text(), solid.shape(), t.atRest(), t.name().range(), solid.altitude()));
       } else if (decl instanceof Decl.WaypointDecl w) {
         complete &= add(waypoints, waypoint(w, units));
       } else if (decl instanceof Decl.PlanDecl pd) {
@@ -135,15 +151,13 @@ final class Checker {
     require(!hasVehicle, top, "the scenario has no vehicle: add `vehicle name { start (x, y) ... }`");
     require(!hasArea, top, "the scenario has no keep-in area: add `area name box (x, y) to (x, y)`");
     require(!hasTarget, top, "the scenario has no target: add `target name box (x, y) to (x, y)`");
-    if (vehicles.size() > 1) {
-      sink.report(Code.UNSUPPORTED, vehicles.get(1).range(), "this version plans for one vehicle; remove `"
-          + vehicles.get(1).name() + "` or plan it in its own scenario");
-      complete = false;
+    complete &= dimensionsOk;
+    if (complete) {
+      complete = assignTargets(vehicles, targets);
     }
-    if (targets.size() > 1) {
-      sink.report(Code.UNSUPPORTED, targets.get(1).range(), "this version plans to one target; remove `"
-          + targets.get(1).name() + "` or make it a waypoint");
-      complete = false;
+    if (plan != null && plan.separation() > 0 && vehicles.size() == 1 && planRanges.containsKey("separation")) {
+      sink.report(Code.NO_EFFECT, planRanges.get("separation"), "`separation` keeps vehicles apart, and this"
+          + " scenario has one vehicle; it has no effect");
     }
     if (!complete || sink.hasErrors()) {
       return null;
@@ -151,11 +165,104 @@ final class Checker {
     int sides = planSides;
     List<Vehicle> withSides = new ArrayList<>();
     for (Vehicle v : vehicles) {
-      withSides.add(v.sides() > 0 ? v : new Vehicle(v.name(), v.dynamics(), v.start(), v.startVelocity(), v.maxSpeed(),
-          v.maxAccel(), v.radius(), sides, v.range()));
+      withSides.add(v.sides() > 0 ? v : v.withSides(sides));
     }
     return new Scenario(name == null ? fileStem(main.source()) : name, withSides, areas.get(0), zones, targets,
-        waypoints, plan);
+        waypoints, plan, dimensions);
+  }
+
+  /**
+   * Reads `dimensions` from the first plan block before any other declaration is checked, since
+   * points and shapes depend on it. It must be written as the number 2 or 3.
+   */
+  private boolean readDimensions(List<Includes.Placed> decls) {
+    for (Includes.Placed p : decls) {
+      if (!(p.decl() instanceof Decl.PlanDecl pd)) {
+        continue;
+      }
+      for (PlanProp prop : pd.props()) {
+        if (prop instanceof PlanProp.Dimensions d) {
+          if (d.count() instanceof Expr.Number n && n.unit() == null && (n.value() == 2 || n.value() == 3)) {
+            dimensions = (int) n.value();
+            return true;
+          }
+          sink.report(Code.VALUE_OUT_OF_RANGE, d.count().range(), "`dimensions` is the number 2 (plan view) or 3"
+              + " (with altitude)");
+          return false;
+        }
+      }
+      return true;
+    }
+    return true;
+  }
+
+  private Area area(Decl.AreaDecl a, Units units) {
+    String what = "area `" + a.name().text() + "`";
+    Shapes.Solid solid = shapes.solid(a.shape(), units, what, dimensions);
+    if (solid == null) {
+      return null;
+    }
+    if (threeD() && solid.altitude() == null) {
+      sink.report(Code.MISSING_ALTITUDE, a.name().range(), "in a 3-D scenario the keep-in " + what + " needs a floor"
+          + " and a ceiling: give its corners an altitude, `box (x1, y1, z1) to (x2, y2, z2)`, or add `altitude LO to HI`");
+      return null;
+    }
+    return new Area(a.name().text(), solid.shape(), a.name().range(), solid.altitude());
+  }
+
+  /**
+   * Checks that every vehicle can get its own target: a vehicle's `target` names a target no other
+   * vehicle names, and the vehicles that name none share at least as many of the remaining targets.
+   * A target no vehicle can end at is a warning. False after an error.
+   */
+  private boolean assignTargets(List<Vehicle> vehicles, List<Target> targets) {
+    boolean ok = true;
+    Map<String, Vehicle> claimed = new LinkedHashMap<>();
+    List<Vehicle> free = new ArrayList<>();
+    for (Vehicle v : vehicles) {
+      if (v.target() == null) {
+        free.add(v);
+        continue;
+      }
+      Vehicle earlier = claimed.putIfAbsent(v.target(), v);
+      if (earlier != null) {
+        sink.report(Code.TARGET_CONFLICT, targetLines.getOrDefault(v.name(), v.range()), "target `" + v.target()
+            + "` is already the target of vehicle `" + earlier.name() + "`; each target takes one vehicle",
+            related("vehicle `" + earlier.name() + "`", targetLines.getOrDefault(earlier.name(), earlier.range())));
+        ok = false;
+      }
+    }
+    List<Target> open = new ArrayList<>();
+    for (Target t : targets) {
+      if (!claimed.containsKey(t.name())) {
+        open.add(t);
+      }
+    }
+    if (free.size() > open.size() && vehicles.size() > 1) {
+      Vehicle v = free.get(open.size());
+      sink.report(Code.TARGET_CONFLICT, v.range(), free.size() + " vehicles name no target and share the "
+          + open.size() + (open.size() == 1 ? " target" : " targets") + " no vehicle names, so vehicle `" + v.name()
+          + "` is left without one; add a target or give it `target NAME`");
+      return false;
+    }
+    if (!ok) {
+      return false;
+    }
+    List<Target> reachable = new ArrayList<>();
+    if (vehicles.size() == 1 && free.size() == 1) {
+      reachable.add(targets.get(0));
+    } else if (!free.isEmpty()) {
+      reachable.addAll(open);
+    }
+    for (Target t : targets) {
+      if (!claimed.containsKey(t.name()) && !reachable.contains(t)) {
+        String why = free.isEmpty() ? "every vehicle names another target"
+            : "the only vehicle ends at the first target `" + targets.get(0).name() + "`";
+        sink.report(Code.TARGET_UNUSED, t.range(), "no vehicle can end at target `" + t.name() + "`: " + why
+            + "; remove it or name it with `target " + t.name() + "` in a vehicle");
+      }
+    }
+    return true;
   }
 
   private int planSides = Vehicle.DEFAULT_SIDES;
@@ -260,14 +367,16 @@ final class Checker {
     String what = "vehicle `" + decl.name().text() + "`";
     boolean ok = true;
     boolean brokenText = sink.hasWithin(Code.SYNTAX_ERROR, decl.range());
-    for (String needed : List.of("start", "speed", "accel")) {
+    List<String> required = threeD() ? List.of("start", "speed", "accel", "climb max") : List.of("start", "speed", "accel");
+    for (String needed : required) {
       if (seen.containsKey(needed)) {
         continue;
       }
       ok = false;
       if (!brokenText) {
-        String example = needed.equals("start") ? "start (0, 0) at rest"
-            : needed.equals("speed") ? "speed max 3 m/s" : "accel max 1 m/s^2";
+        String example = needed.equals("start") ? (threeD() ? "start (0, 0, 10) at rest" : "start (0, 0) at rest")
+            : needed.equals("speed") ? "speed max 3 m/s" : needed.equals("accel") ? "accel max 1 m/s^2"
+            : "climb max 2 m/s";
         sink.report(Code.MISSING_PROPERTY, decl.name().range(), what + " needs `" + needed + "` (e.g. `" + example + "`)");
       }
     }
@@ -278,6 +387,12 @@ final class Checker {
     Double accel = null;
     double radius = 0;
     int sides = 0;
+    double startZ = 0;
+    double startRate = 0;
+    Double climb = null;
+    Double climbAccel = null;
+    Span limits = null;
+    String target = null;
     for (VehicleProp prop : seen.values()) {
       if (prop instanceof VehicleProp.Dynamics d) {
         if (!d.model().text().equals(Vehicle.Dynamics.DOUBLE_INTEGRATOR.keyword())) {
@@ -286,10 +401,17 @@ final class Checker {
           ok = false;
         }
       } else if (prop instanceof VehicleProp.Start s) {
-        start = eval.point(s.position(), Dim.LENGTH, units, "the start of " + what);
+        int n = dimensions;
+        double[] p = eval.coordinates(s.position(), Dim.LENGTH, units, "the start of " + what, n, n,
+            threeD() ? " (a 3-D scenario needs the start altitude)" : Shapes.PLAN_VIEW_ADVICE);
+        start = p == null ? null : new Vec2(p[0], p[1]);
+        startZ = p == null ? 0 : p[n - 1];
         ok &= start != null;
         if (s.motion() instanceof VehicleProp.Motion.VelocityVector vv) {
-          velocity = eval.point(vv.velocity(), Dim.SPEED, units, "the start velocity of " + what);
+          double[] u = eval.coordinates(vv.velocity(), Dim.SPEED, units, "the start velocity of " + what, 2, n,
+              threeD() ? null : Shapes.PLAN_VIEW_ADVICE);
+          velocity = u == null ? null : new Vec2(u[0], u[1]);
+          startRate = u != null && u.length == 3 ? u[2] : 0;
           ok &= velocity != null;
         } else if (s.motion() instanceof VehicleProp.Motion.SpeedHeading sh) {
           Double v = eval.expect(sh.speed(), Dim.SPEED, units, "the start speed");
@@ -320,17 +442,68 @@ final class Checker {
         Integer count = eval.expectCount(s.count(), units, "the number of sides", 3, 64);
         ok &= count != null;
         sides = count == null ? 0 : count;
+      } else if (prop instanceof VehicleProp.Climb c) {
+        if (planViewOnly(c.range(), "`climb max`")) {
+          ok = false;
+        } else {
+          climb = positive(eval.expect(c.max(), Dim.SPEED, units, "the climb limit"), c.max().range(), "the climb limit");
+          ok &= climb != null;
+        }
+      } else if (prop instanceof VehicleProp.ClimbAccel c) {
+        if (planViewOnly(c.range(), "`climb accel max`")) {
+          ok = false;
+        } else {
+          climbAccel = positive(eval.expect(c.max(), Dim.ACCEL, units, "the climb acceleration limit"), c.max().range(),
+              "the climb acceleration limit");
+          ok &= climbAccel != null;
+        }
+      } else if (prop instanceof VehicleProp.Altitude a) {
+        limits = shapes.altitude(a.span(), units, what, threeD());
+        ok &= limits != null;
+      } else if (prop instanceof VehicleProp.TargetRef t) {
+        Symbol symbol = symbols.lookup(t.target().text());
+        if (symbol != null) {
+          symbols.reference(t.target(), symbol);
+        }
+        if (symbol == null || symbol.kind() != Symbol.Kind.TARGET) {
+          sink.report(Code.UNKNOWN_NAME, t.target().range(), symbol == null
+              ? "no target named `" + t.target().text() + "` is declared"
+              : "`" + t.target().text() + "` is a " + symbol.kind().word() + ", not a target");
+          ok = false;
+        } else {
+          target = t.target().text();
+          targetLines.put(decl.name().text(), t.range());
+        }
       }
     }
     if (!ok) {
       return null;
+    }
+    Vehicle.Vertical vertical = null;
+    if (threeD()) {
+      if (Math.abs(startRate) > climb * (1 + 1e-9)) {
+        sink.report(Code.START_TOO_FAST, seen.get("start").range(), what + " starts climbing at "
+            + Format.number(startRate) + " m/s, above its climb limit of " + Format.number(climb) + " m/s");
+      }
+      vertical = new Vehicle.Vertical(startZ, startRate, climb, climbAccel == null ? accel : climbAccel, limits);
     }
     if (velocity.norm() > speed * (1 + 1e-9)) {
       VehicleProp s = seen.get("start");
       sink.report(Code.START_TOO_FAST, s.range(), what + " starts at " + Format.number(velocity.norm())
           + " m/s, above its speed limit of " + Format.number(speed) + " m/s");
     }
-    return new Vehicle(decl.name().text(), dynamics, start, velocity, speed, accel, radius, sides, decl.name().range());
+    return new Vehicle(decl.name().text(), dynamics, start, velocity, speed, accel, radius, sides, decl.name().range(),
+        vertical, target);
+  }
+
+  /** Reports a 3-D-only vehicle item in a plan-view scenario; true when it did. */
+  private boolean planViewOnly(SourceRange at, String item) {
+    if (threeD()) {
+      return false;
+    }
+    sink.report(Code.DIMENSION_MISMATCH, at, item + " is for 3-D scenarios; add `dimensions 3` to the plan or"
+        + " remove this line");
+    return true;
   }
 
   private Double positive(Double value, SourceRange range, String what) {
@@ -343,10 +516,15 @@ final class Checker {
 
   private Waypoint waypoint(Decl.WaypointDecl w, Units units) {
     String what = "waypoint `" + w.name().text() + "`";
-    Vec2 p = eval.point(w.point(), Dim.LENGTH, units, what);
+    double[] p = eval.coordinates(w.point(), Dim.LENGTH, units, what, 2, dimensions,
+        threeD() ? null : Shapes.PLAN_VIEW_ADVICE);
     Double tolerance = positive(eval.expect(w.tolerance(), Dim.LENGTH, units, "the tolerance"), w.tolerance().range(),
         "the tolerance");
-    return p == null || tolerance == null ? null : new Waypoint(w.name().text(), p, tolerance, w.name().range());
+    if (p == null || tolerance == null) {
+      return null;
+    }
+    Span band = p.length == 3 ? new Span(p[2] - tolerance, p[2] + tolerance) : null;
+    return new Waypoint(w.name().text(), new Vec2(p[0], p[1]), tolerance, w.name().range(), band);
   }
 
   private PlanOptions plan(Decl.PlanDecl decl, Units units, int zoneCount) {
@@ -394,9 +572,38 @@ final class Checker {
     }
     double timeWeight = 1;
     double fuelWeight = 0;
+    boolean latest = false;
     if (seen.get("minimize") instanceof PlanProp.Minimize m) {
       timeWeight = 0;
+      PlanProp.Term plainTime = null;
+      PlanProp.Term latestTime = null;
       for (PlanProp.Term t : m.terms()) {
+        if (t.latest() && t.what().equals("fuel") && t.weight() == null
+            && symbols.lookup("latest") != null && symbols.lookup("latest").kind() == Symbol.Kind.CONSTANT) {
+          // `latest fuel` with a constant named `latest`: the constant is the weight.
+          SourceRange at = new SourceRange(t.range().source(), t.range().start(), t.range().start() + "latest".length());
+          t = new PlanProp.Term(new Expr.Ref(new Name("latest", at)), "fuel", false, t.range());
+        }
+        if (t.latest() && t.what().equals("fuel")) {
+          sink.report(Code.UNKNOWN_OPTION, t.range(), "`latest` goes with `time` only (the latest arrival of the"
+              + " fleet); fuel is always summed over the vehicles");
+          ok = false;
+          continue;
+        }
+        if (t.what().equals("time")) {
+          if (t.latest()) {
+            latestTime = latestTime == null ? t : latestTime;
+          } else {
+            plainTime = plainTime == null ? t : plainTime;
+          }
+          if (latestTime != null && plainTime != null) {
+            sink.report(Code.DUPLICATE_PROPERTY, t.range(), "the objective counts time one way: the sum of arrival"
+                + " times (`time`) or the latest arrival (`latest time`), not both");
+            ok = false;
+            continue;
+          }
+          latest |= t.latest();
+        }
         double w = 1;
         if (t.weight() != null) {
           Double value = eval.expect(t.weight(), Dim.NONE, units, "a weight");
@@ -482,6 +689,21 @@ final class Checker {
         threads = n == null ? 0 : n;
       }
     }
+    double separation = 0;
+    if (seen.get("separation") instanceof PlanProp.Separation sep) {
+      Double d = eval.expect(sep.value(), Dim.LENGTH, units, "the separation");
+      if (d != null && d < 0) {
+        sink.report(Code.VALUE_OUT_OF_RANGE, sep.value().range(), "the separation cannot be negative");
+        d = null;
+      }
+      ok &= d != null;
+      separation = d == null ? 0 : d;
+    }
+    if (clusters > 0 && threeD()) {
+      sink.report(Code.UNSUPPORTED, planRanges.getOrDefault("clusters", decl.range()), "clusters group zones into"
+          + " plan-view boxes; in a 3-D scenario this version avoids zones one by one, so remove `clusters`");
+      ok = false;
+    }
     boolean guard = !(seen.get("guard") instanceof PlanProp.Guard g) || g.on();
     boolean pruning = !(seen.get("pruning") instanceof PlanProp.Pruning p) || p.on();
     if (seen.get("sides") instanceof PlanProp.Sides s) {
@@ -493,7 +715,7 @@ final class Checker {
       return null;
     }
     return new PlanOptions(step, horizon, timeWeight, fuelWeight, clusters, rule, closedLoop, solver, timeLimit, gap,
-        threads, guard, pruning, decl.range());
+        threads, guard, pruning, decl.range(), separation, latest);
   }
 
   /** Solver names the plan block accepts (the solve stage maps them to backends). */

@@ -181,9 +181,21 @@ final class Evaluator {
 
   /** A 2-D point whose coordinates have dimension {@code dim}, or null after a report. */
   Vec2 point(PointNode point, Dim dim, Units units, String what) {
-    if (point.coordinates().size() != 2) {
+    double[] xy = coordinates(point, dim, units, what, 2, 2, null);
+    return xy == null ? null : new Vec2(xy[0], xy[1]);
+  }
+
+  /**
+   * The coordinates of a point, from {@code min} to {@code max} of them, each of dimension {@code
+   * dim}, or null after a report. {@code advice} ends the message about a wrong count (may be null).
+   */
+  double[] coordinates(PointNode point, Dim dim, Units units, String what, int min, int max, String advice) {
+    int n = point.coordinates().size();
+    if (n < min || n > max) {
+      String wanted = min == max ? (min == 2 ? "two coordinates (x, y)" : "three coordinates (x, y, z)")
+          : "two or three coordinates";
       sink.report(Code.WRONG_DIMENSION, point.range(),
-          what + " needs two coordinates (x, y); this one has " + point.coordinates().size());
+          what + " needs " + wanted + "; this one has " + n + (advice == null ? "" : advice));
       return null;
     }
     double bareFactor = units.defaultFactor(dim);
@@ -200,8 +212,8 @@ final class Evaluator {
       }
       bareFactor = unit.toSi();
     }
-    double[] xy = new double[2];
-    for (int i = 0; i < 2; i++) {
+    double[] xy = new double[n];
+    for (int i = 0; i < n; i++) {
       Expr e = point.coordinates().get(i);
       Quantity q = eval(e, units);
       if (q == null) {
@@ -217,6 +229,6 @@ final class Evaluator {
         return null;
       }
     }
-    return new Vec2(xy[0], xy[1]);
+    return xy;
   }
 }

@@ -2,6 +2,7 @@ package dev.skerry.compiler.semdiff;
 
 import dev.skerry.compiler.model.Area;
 import dev.skerry.compiler.model.Shape;
+import dev.skerry.compiler.model.Span;
 import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
@@ -38,7 +39,34 @@ final class EntityDetails {
       out.add(new Change.Detail("sides", Integer.toString(a.sides()), Integer.toString(b.sides()),
           "sides " + a.sides() + " → " + b.sides() + " (limit polygon faces)"));
     }
+    if (a.target() == null ? b.target() != null : !a.target().equals(b.target())) {
+      String before = a.target() == null ? "any free target" : a.target();
+      String after = b.target() == null ? "any free target" : b.target();
+      out.add(new Change.Detail("target", before, after, "target " + before + " → " + after));
+    }
+    Vehicle.Vertical va = a.vertical();
+    Vehicle.Vertical vb = b.vertical();
+    if (va != null && vb != null) {
+      scalar(out, "start altitude", va.start(), vb.start(), "m");
+      scalar(out, "start climb rate", va.startRate(), vb.startRate(), "m/s");
+      scalar(out, "climb max", va.maxClimb(), vb.maxClimb(), "m/s");
+      scalar(out, "climb accel max", va.maxClimbAccel(), vb.maxClimbAccel(), "m/s^2");
+      altitude(out, va.limits(), vb.limits());
+    }
     return out;
+  }
+
+  /** A change of an altitude range; null is "every altitude". */
+  private static void altitude(List<Change.Detail> out, Span a, Span b) {
+    String before = span(a);
+    String after = span(b);
+    if (!before.equals(after)) {
+      out.add(new Change.Detail("altitude", before, after, "altitude " + before + " → " + after));
+    }
+  }
+
+  private static String span(Span s) {
+    return s == null ? "any" : Words.quantity(s.lo(), "m") + " to " + Words.quantity(s.hi(), "m");
   }
 
   static List<Change.Detail> area(Area a, Area b) {
@@ -47,6 +75,7 @@ final class EntityDetails {
       out.add(new Change.Detail("name", a.name(), b.name(), "renamed to " + b.name()));
     }
     region(out, a.shape(), b.shape());
+    altitude(out, a.altitude(), b.altitude());
     return out;
   }
 
@@ -54,12 +83,14 @@ final class EntityDetails {
   static List<Change.Detail> zone(Zone a, Zone b) {
     List<Change.Detail> out = new ArrayList<>();
     region(out, a.shape(), b.shape());
+    altitude(out, a.altitude(), b.altitude());
     return out;
   }
 
   static List<Change.Detail> target(Target a, Target b) {
     List<Change.Detail> out = new ArrayList<>();
     region(out, a.region(), b.region());
+    altitude(out, a.altitude(), b.altitude());
     if (a.atRest() != b.atRest()) {
       out.add(new Change.Detail("at rest", Boolean.toString(a.atRest()), Boolean.toString(b.atRest()),
           b.atRest() ? "now must be reached at rest" : "no longer needs to be reached at rest"));
@@ -74,6 +105,7 @@ final class EntityDetails {
           "moved " + Words.move(b.point().minus(a.point()))));
     }
     scalar(out, "within", a.tolerance(), b.tolerance(), "m");
+    altitude(out, a.altitude(), b.altitude());
     return out;
   }
 

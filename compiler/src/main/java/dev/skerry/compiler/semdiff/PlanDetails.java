@@ -22,6 +22,7 @@ final class PlanDetails {
     field(out, "threads", threads(a.threads()), threads(b.threads()));
     field(out, "guard", onOff(a.guard()), onOff(b.guard()));
     field(out, "pruning", onOff(a.pruning()), onOff(b.pruning()));
+    field(out, "separation", Words.quantity(a.separation(), "m"), Words.quantity(b.separation(), "m"));
     return out;
   }
 
@@ -34,7 +35,7 @@ final class PlanDetails {
   static String objective(PlanOptions p) {
     List<String> terms = new ArrayList<>();
     if (p.timeWeight() != 0) {
-      terms.add(weighted(p.timeWeight(), "time"));
+      terms.add(weighted(p.timeWeight(), p.latestArrival() ? "latest time" : "time"));
     }
     if (p.fuelWeight() != 0) {
       terms.add(weighted(p.fuelWeight(), "fuel"));

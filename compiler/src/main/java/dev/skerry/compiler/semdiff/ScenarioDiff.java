@@ -51,7 +51,11 @@ public final class ScenarioDiff {
     entities("waypoint", list(before, Scenario::waypoints), list(after, Scenario::waypoints), w -> w.name(),
         EntityDetails::waypoint);
     if (before != null && after != null) {
-      List<Change.Detail> plan = PlanDetails.of(before.plan(), after.plan());
+      List<Change.Detail> plan = new ArrayList<>(PlanDetails.of(before.plan(), after.plan()));
+      if (before.dimensions() != after.dimensions()) {
+        plan.add(0, new Change.Detail("dimensions", Integer.toString(before.dimensions()),
+            Integer.toString(after.dimensions()), "dimensions " + before.dimensions() + " → " + after.dimensions()));
+      }
       if (!plan.isEmpty()) {
         changes.add(new Change("plan", "", Change.Status.CHANGED, null, plan));
       }

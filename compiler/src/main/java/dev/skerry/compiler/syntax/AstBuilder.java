@@ -155,8 +155,29 @@ final class AstBuilder {
     } else if (ctx instanceof SidesItemContext c) {
       Expr e = expr(c.expr());
       return e == null ? null : new VehicleProp.Sides(e, r);
+    } else if (ctx instanceof ClimbItemContext c) {
+      Expr e = expr(c.expr());
+      return e == null ? null : new VehicleProp.Climb(e, r);
+    } else if (ctx instanceof ClimbAccelItemContext c) {
+      Expr e = expr(c.expr());
+      return e == null ? null : new VehicleProp.ClimbAccel(e, r);
+    } else if (ctx instanceof AltitudeItemContext c) {
+      ShapeNode.AltitudeNode span = altitudeRange(c.altitudeRange());
+      return span == null ? null : new VehicleProp.Altitude(span, r);
+    } else if (ctx instanceof VehicleTargetItemContext c) {
+      Name target = name(c.name());
+      return target == null ? null : new VehicleProp.TargetRef(target, r);
     }
     return null;
+  }
+
+  private ShapeNode.AltitudeNode altitudeRange(AltitudeRangeContext ctx) {
+    if (ctx == null || ctx.getChildCount() == 0 || ctx.expr().size() < 2) {
+      return null;
+    }
+    Expr low = expr(ctx.expr(0));
+    Expr high = expr(ctx.expr(1));
+    return low == null || high == null ? null : new ShapeNode.AltitudeNode(low, high, range(ctx));
   }
 
   private VehicleProp.Motion startMotion(StartMotionContext ctx) {
@@ -219,7 +240,11 @@ final class AstBuilder {
       }
       PointNode from = point(c.point(0));
       PointNode to = point(c.point(1));
-      return from == null || to == null ? null : new ShapeNode.BoxNode(from, to, range(c));
+      ShapeNode.AltitudeNode altitude = altitudeRange(c.altitudeRange());
+      if (from == null || to == null || (c.altitudeRange() != null && altitude == null)) {
+        return null;
+      }
+      return new ShapeNode.BoxNode(from, to, altitude, range(c));
     } else if (ctx instanceof PolygonShapeContext c) {
       List<PointNode> corners = new ArrayList<>();
       for (PointContext p : c.point()) {
@@ -229,7 +254,11 @@ final class AstBuilder {
         }
         corners.add(corner);
       }
-      return corners.isEmpty() ? null : new ShapeNode.PolygonNode(corners, range(c));
+      ShapeNode.AltitudeNode altitude = altitudeRange(c.altitudeRange());
+      if (corners.isEmpty() || (c.altitudeRange() != null && altitude == null)) {
+        return null;
+      }
+      return new ShapeNode.PolygonNode(corners, altitude, range(c));
     }
     return null;
   }
@@ -264,7 +293,7 @@ final class AstBuilder {
         if (t.simpleValue() != null && weight == null) {
           return null;
         }
-        terms.add(new PlanProp.Term(weight, what, range(t)));
+        terms.add(new PlanProp.Term(weight, what, t.LATEST() != null, range(t)));
       }
       return terms.isEmpty() ? null : new PlanProp.Minimize(terms, r);
     } else if (ctx instanceof ClustersItemContext c) {
@@ -284,6 +313,12 @@ final class AstBuilder {
     } else if (ctx instanceof PlanSidesItemContext c) {
       Expr e = expr(c.expr());
       return e == null ? null : new PlanProp.Sides(e, r);
+    } else if (ctx instanceof DimensionsItemContext c) {
+      Expr e = expr(c.expr());
+      return e == null ? null : new PlanProp.Dimensions(e, r);
+    } else if (ctx instanceof SeparationItemContext c) {
+      Expr e = expr(c.expr());
+      return e == null ? null : new PlanProp.Separation(e, r);
     }
     return null;
   }

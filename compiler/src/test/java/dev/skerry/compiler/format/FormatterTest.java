@@ -67,6 +67,72 @@ class FormatterTest {
       }
       """;
 
+  private static final String FLEET_3D = """
+      scenario   pair  units m,s
+      vehicle a{start (1,2, 3) velocity (1,0,0.5) speed max 3m/s accel max 1 m/s^2 climb max 2 m/s climb accel max 0.5 m/s^2 altitude 1 m to 40 m target t1}
+      vehicle b{start (5,2,3) at rest speed max 3m/s accel max 1 m/s^2 climb max 2m/s}
+      area air box (0,0,0) to (100,100,50)
+      zone hill polygon (40,0) (60,0) (50,30) altitude 0 m to 20m
+      zone mast box (10,10,0)to(12,12,30)
+      target t1 point (90,90,5) within 2 m at rest
+      target t2 box (90,10) to (95,15) altitude 0 to 10 at rest
+      waypoint w (50,50,30) within 3
+      plan { step 1 s horizon 60 dimensions 3 separation 5 m minimize latest time+0.1 fuel }
+      """;
+
+  private static final String FLEET_3D_CANONICAL = """
+      scenario pair
+      units m, s
+
+      vehicle a {
+        start (1, 2, 3) velocity (1, 0, 0.5)
+        speed max 3 m/s
+        accel max 1 m/s^2
+        climb max 2 m/s
+        climb accel max 0.5 m/s^2
+        altitude 1 m to 40 m
+        target t1
+      }
+
+      vehicle b {
+        start (5, 2, 3) at rest
+        speed max 3 m/s
+        accel max 1 m/s^2
+        climb max 2 m/s
+      }
+
+      area air box (0, 0, 0) to (100, 100, 50)
+
+      zone hill polygon (40, 0) (60, 0) (50, 30) altitude 0 m to 20 m
+      zone mast box (10, 10, 0) to (12, 12, 30)
+
+      target t1 point (90, 90, 5) within 2 m at rest
+      target t2 box (90, 10) to (95, 15) altitude 0 to 10 at rest
+
+      waypoint w (50, 50, 30) within 3
+
+      plan {
+        step 1 s
+        horizon 60
+        dimensions 3
+        separation 5 m
+        minimize latest time + 0.1 fuel
+      }
+      """;
+
+  /** The words of fleets and 3-D scenarios lay out like the others, idempotently, with the same meaning. */
+  @Test
+  void laysOutAThreeDimensionalFleet() {
+    String once = Formatter.format(FLEET_3D);
+    assertEquals(FLEET_3D_CANONICAL, once);
+    assertEquals(once, Formatter.format(once));
+    Path place = Texts.EXAMPLES.resolve("fleet_3d.skerry");
+    var before = Texts.check(place, FLEET_3D);
+    var after = Texts.check(place, once);
+    assertTrue(before.diagnostics().isEmpty(), before.diagnostics().toString());
+    assertTrue(dev.skerry.compiler.semdiff.ModelView.sameMeaning(before.scenario(), after.scenario()));
+  }
+
   @Test
   void laysOutACrampedFileCanonically() {
     assertEquals(CANONICAL, Formatter.format(MESSY));

@@ -28,14 +28,15 @@ public final class Completions {
 
   public static final List<String> TOP_KEYWORDS = List.of("scenario", "units", "const", "include", "vehicle", "area",
       "zone", "target", "waypoint", "plan");
-  public static final List<String> VEHICLE_KEYWORDS = List.of("dynamics", "start", "speed", "accel", "radius", "sides");
+  public static final List<String> VEHICLE_KEYWORDS = List.of("dynamics", "start", "speed", "accel", "radius", "sides",
+      "target", "climb", "altitude");
   public static final List<String> PLAN_KEYWORDS = List.of("step", "horizon", "minimize", "clusters", "closed_loop",
-      "solver", "guard", "pruning", "sides");
+      "solver", "guard", "pruning", "sides", "dimensions", "separation");
 
   private static final Pattern AFTER_NUMBER = Pattern.compile("(?:^|[\\s(,=+\\-*/])[0-9]+(?:\\.[0-9]*)?(?:[eE][+-]?[0-9]+)?\\s*$");
   private static final Pattern WORD = Pattern.compile("[A-Za-z_][A-Za-z_0-9]*|\\)|[0-9.]+");
   /** Lines whose numbers are counts or weights, never quantities with a unit. */
-  private static final Set<String> UNITLESS = Set.of("horizon", "sides", "clusters", "minimize");
+  private static final Set<String> UNITLESS = Set.of("horizon", "sides", "clusters", "minimize", "dimensions");
 
   private Completions() {}
 
@@ -90,6 +91,17 @@ public final class Completions {
     if (AFTER_NUMBER.matcher(before).find() && !UNITLESS.contains(first)) {
       for (String u : units()) {
         out.add(new Item(u, Kind.UNIT, "unit"));
+      }
+      return out;
+    }
+    if (block == Block.VEHICLE && first.equals("target")) {
+      // `target NAME` in a vehicle: the declared targets.
+      if (words.size() == 1 && analysis != null) {
+        for (Symbol s : analysis.check().symbols().symbols()) {
+          if (s.kind() == Symbol.Kind.TARGET) {
+            out.add(new Item(s.name().text(), Kind.NAME, "target"));
+          }
+        }
       }
       return out;
     }
@@ -162,6 +174,12 @@ public final class Completions {
     switch (first) {
       case "speed", "accel", "closed_loop":
         return n == 1 ? List.of("max") : List.of();
+      case "climb":
+        return n == 1 ? List.of("max", "accel") : n == 2 && last.equals("accel") ? List.of("max") : List.of();
+      case "altitude":
+        return n >= 2 && !words.contains("to") ? List.of("to") : List.of();
+      case "dimensions":
+        return n == 1 ? List.of("2", "3") : List.of();
       case "dynamics":
         return n == 1 ? List.of("double_integrator") : List.of();
       case "start":
@@ -176,7 +194,14 @@ public final class Completions {
         if (n == 2) {
           return List.of("box", "polygon");
         }
-        return words.contains("box") && afterPoint && !words.contains("to") ? List.of("to") : List.of();
+        if (words.contains("altitude")) {
+          return words.indexOf("altitude") < n - 1 && !last.equals("to") && count(words, "to") < (words.contains("box") ? 2 : 1)
+              ? List.of("to") : List.of();
+        }
+        if (words.contains("box") && afterPoint) {
+          return words.contains("to") ? List.of("altitude") : List.of("to");
+        }
+        return words.contains("polygon") && afterPoint ? List.of("altitude") : List.of();
       case "target":
         if (n == 2) {
           return List.of("box", "polygon", "point");
@@ -187,7 +212,14 @@ public final class Completions {
         if (words.contains("point")) {
           return afterPoint && !words.contains("within") ? List.of("within") : List.of("at");
         }
-        return afterPoint && (words.contains("to") || words.contains("polygon")) ? List.of("at") : List.of();
+        if (words.contains("altitude")) {
+          int needed = words.contains("box") ? 2 : 1;
+          if (last.equals("altitude") || last.equals("to") || last.equals("at")) {
+            return last.equals("at") ? List.of("rest") : List.of();
+          }
+          return count(words, "to") < needed ? List.of("to") : List.of("at");
+        }
+        return afterPoint && (words.contains("to") || words.contains("polygon")) ? List.of("at", "altitude") : List.of();
       case "waypoint":
         return afterPoint && !words.contains("within") ? List.of("within") : List.of();
       case "guard", "pruning":
@@ -197,7 +229,7 @@ public final class Completions {
       case "solver":
         return n == 1 ? List.of("default") : List.of("time_limit", "gap", "threads");
       case "minimize":
-        return List.of("time", "fuel");
+        return last.equals("latest") ? List.of("time") : List.of("time", "fuel", "latest");
       default:
         return List.of();
     }
@@ -208,12 +240,21 @@ public final class Completions {
     String last = words.get(words.size() - 1);
     return switch (first) {
       case "speed", "accel", "closed_loop" -> last.equals("max") || words.size() > 2;
-      case "radius", "sides", "step", "horizon", "minimize" -> true;
+      case "climb" -> last.equals("max") || (words.size() > 2 && words.contains("max"));
+      case "radius", "sides", "step", "horizon", "minimize", "separation", "altitude" -> true;
       case "clusters" -> words.size() == 1;
       case "const" -> before.contains("=");
       case "solver" -> words.size() > 2;
       case "start", "zone", "area", "target", "waypoint" -> before.contains("(") || last.equals("within");
       default -> false;
     };
+  }
+
+  private static int count(List<String> words, String word) {
+    int n = 0;
+    for (String w : words) {
+      n += w.equals(word) ? 1 : 0;
+    }
+    return n;
   }
 }

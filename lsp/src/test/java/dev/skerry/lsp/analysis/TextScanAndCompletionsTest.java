@@ -40,8 +40,23 @@ class TextScanAndCompletionsTest {
     assertEquals(List.of("to"), labels("zone z box (1, 2) |"));
     assertEquals(List.of("within"), labels("target t point (1, 2) |"));
     assertEquals(List.of("on", "off"), labels("plan {\n  guard |\n}"));
-    assertEquals(List.of("time", "fuel"), labels("plan {\n  minimize time + 0.1 |\n}"), "a weight has no unit");
+    assertEquals(List.of("time", "fuel", "latest"), labels("plan {\n  minimize time + 0.1 |\n}"), "a weight has no unit");
+    assertEquals(List.of("time"), labels("plan {\n  minimize latest |\n}"));
     assertEquals(List.of(), labels("plan {\n  horizon 4|\n}"), "a horizon is a count: no units");
     assertTrue(labels("vehicle v {\n  radius 4 |\n}").contains("cm"));
+  }
+
+  @Test
+  void followWordsForFleetsAndAltitude() {
+    assertEquals(List.of("max", "accel"), labels("vehicle v {\n  climb |\n}"));
+    assertEquals(List.of("max"), labels("vehicle v {\n  climb accel |\n}"));
+    assertEquals(List.of("to"), labels("vehicle v {\n  altitude lo |\n}"));
+    assertEquals(List.of("altitude"), labels("zone z box (1, 2) to (3, 4) |"));
+    assertEquals(List.of("altitude"), labels("zone z polygon (1, 2) (3, 4) (0, 5) |"));
+    assertEquals(List.of("to"), labels("zone z polygon (1, 2) (3, 4) (0, 5) altitude lo |"));
+    assertEquals(List.of("at", "altitude"), labels("target t box (1, 2) to (3, 4) |"));
+    assertEquals(List.of("at"), labels("target t box (1, 2) to (3, 4) altitude lo to hi |"));
+    assertEquals(List.of("2", "3"), labels("plan {\n  dimensions |\n}"));
+    assertEquals(List.of(), labels("vehicle v {\n  target |\n}"), "no analysis: no target names");
   }
 }

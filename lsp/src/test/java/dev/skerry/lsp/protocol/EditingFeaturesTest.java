@@ -53,7 +53,8 @@ class EditingFeaturesTest {
         """;
     try (Harness h = new Harness(dir)) {
       List<String> inVehicle = complete(h, "a.skerry", body.formatted("|", "", ""));
-      assertEquals(List.of("dynamics", "speed", "accel", "radius", "sides"), inVehicle, "start is already given");
+      assertEquals(List.of("dynamics", "speed", "accel", "radius", "sides", "target", "climb", "altitude"), inVehicle,
+          "start is already given");
       List<String> inPlan = complete(h, "b.skerry", body.formatted("", "ho|", ""));
       assertEquals(List.of("horizon"), inPlan);
       List<String> top = complete(h, "c.skerry", body.formatted("", "", "z|"));

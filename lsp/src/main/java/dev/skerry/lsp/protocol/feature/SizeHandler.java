@@ -67,6 +67,9 @@ public final class SizeHandler {
         || sizes.comparison().binaries() >= sizes.asWritten().binaries()) {
       return null;
     }
+    if (result.check().scenario() != null && result.check().scenario().threeD()) {
+      return null; // clusters are plan-view boxes; the checker refuses them in a 3-D scenario
+    }
     PlanProp.Horizon horizon = null;
     for (PlanProp p : planProps(result)) {
       if (p instanceof PlanProp.Clusters) {
