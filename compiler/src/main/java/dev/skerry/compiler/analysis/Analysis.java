@@ -27,7 +27,10 @@ public final class Analysis {
         : written.sizes();
     Sizes comparison;
     String label;
-    if (plan.clustered()) {
+    if (s.threeD() && !plan.clustered()) {
+      comparison = null;
+      label = "clusters: not available in 3-D";
+    } else if (plan.clustered()) {
       comparison = sizes(s.withPlan(plan.withClusters(0, plan.symmetry())));
       label = "without clusters";
     } else {

@@ -248,18 +248,11 @@ final class Checker {
     if (!ok) {
       return false;
     }
-    List<Target> reachable = new ArrayList<>();
-    if (vehicles.size() == 1 && free.size() == 1) {
-      reachable.add(targets.get(0));
-    } else if (!free.isEmpty()) {
-      reachable.addAll(open);
-    }
-    for (Target t : targets) {
-      if (!claimed.containsKey(t.name()) && !reachable.contains(t)) {
-        String why = free.isEmpty() ? "every vehicle names another target"
-            : "the only vehicle ends at the first target `" + targets.get(0).name() + "`";
-        sink.report(Code.TARGET_UNUSED, t.range(), "no vehicle can end at target `" + t.name() + "`: " + why
-            + "; remove it or name it with `target " + t.name() + "` in a vehicle");
+    if (free.isEmpty()) {
+      for (Target t : open) {
+        sink.report(Code.TARGET_UNUSED, t.range(), "no vehicle can end at target `" + t.name()
+            + "`: every vehicle names another target; remove it or name it with `target " + t.name()
+            + "` in a vehicle");
       }
     }
     return true;

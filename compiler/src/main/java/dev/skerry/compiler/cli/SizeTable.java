@@ -33,7 +33,9 @@ final class SizeTable {
     out.printf(Locale.ROOT, "  %-34s %10s %11s %10s %11s%n", "MILP size", "binaries", "continuous", "rows", "non-zeros");
     row(out, "as written" + (result.scenario().plan().pruning() ? " (pruned)" : ""), r.asWritten());
     row(out, "without pruning", r.unpruned());
-    row(out, r.comparisonLabel(), r.comparison());
+    if (r.comparison() != null) {
+      row(out, r.comparisonLabel(), r.comparison());
+    }
     Sizes w = r.asWritten();
     out.printf(Locale.ROOT, "  binaries as written: %,d box-zone faces, %,d polygon faces, %,d arrival, %,d waypoint,"
             + " %,d cluster assignment, %,d cluster avoidance%s%n", w.zoneBoxBinaries(), w.zonePolygonBinaries(),
@@ -63,9 +65,11 @@ final class SizeTable {
     JsonObject sizes = new JsonObject();
     sizes.add("asWritten", json(r.asWritten()));
     sizes.add("unpruned", json(r.unpruned()));
-    JsonObject comparison = json(r.comparison());
-    comparison.addProperty("label", r.comparisonLabel());
-    sizes.add("comparison", comparison);
+    if (r.comparison() != null) {
+      JsonObject comparison = json(r.comparison());
+      comparison.addProperty("label", r.comparisonLabel());
+      sizes.add("comparison", comparison);
+    }
     JsonArray facts = new JsonArray();
     for (Fact f : r.facts()) {
       JsonObject o = new JsonObject();

@@ -37,7 +37,7 @@ public final class SizeHandler {
       }
       if (p instanceof PlanProp.Horizon) {
         out.add(hint(p.range(), counts(sizes.asWritten())));
-      } else if (p instanceof PlanProp.Clusters) {
+      } else if (p instanceof PlanProp.Clusters && sizes.comparison() != null) {
         out.add(hint(p.range(), sizes.comparisonLabel() + ": " + counts(sizes.comparison())));
       }
     }
@@ -56,6 +56,9 @@ public final class SizeHandler {
     if (sizes == null) {
       return List.of();
     }
+    if (sizes.comparison() == null) {
+      return List.of("- MILP as written: " + counts(sizes.asWritten()), "- " + sizes.comparisonLabel());
+    }
     return List.of("- MILP as written: " + counts(sizes.asWritten()),
         "- " + sizes.comparisonLabel() + ": " + counts(sizes.comparison()));
   }
@@ -63,7 +66,7 @@ public final class SizeHandler {
   /** "Use N clusters: binaries A → B", inserting a clusters line after the horizon, when that has fewer binaries. */
   public CodeAction useClusters(AnalysisResult result) {
     SizeEstimator.PlanSizes sizes = result.sizes();
-    if (sizes == null || sizes.suggestedClusters() <= 0
+    if (sizes == null || sizes.suggestedClusters() <= 0 || sizes.comparison() == null
         || sizes.comparison().binaries() >= sizes.asWritten().binaries()) {
       return null;
     }
