@@ -231,10 +231,9 @@ class FleetAndAltitudeTest {
     assertEquals(2, skiffs.vehicles().size());
     assertEquals(2, skiffs.dimensions());
     assertEquals(6, skiffs.plan().separation(), 1e-12);
-    for (Vehicle v : skiffs.vehicles()) {
-      assertNull(v.target());
-      assertEquals(2, skiffs.candidateTargets(v).size());
-    }
+    assertEquals("station_south", skiffs.vehicles().get(0).target());
+    assertNull(skiffs.vehicles().get(1).target());
+    assertEquals(List.of(skiffs.target("station_east")), skiffs.candidateTargets(skiffs.vehicles().get(1)));
     Scenario ridge = ExamplesTest.check(ExamplesTest.EXAMPLES.resolve("ridge_drone.skerry")).scenario();
     assertEquals(3, ridge.dimensions());
     assertEquals(new Span(0, 60), ridge.area().altitude());
