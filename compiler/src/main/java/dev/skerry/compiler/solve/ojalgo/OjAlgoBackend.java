@@ -44,9 +44,11 @@ import org.ojalgo.type.context.NumberContext;
  *       its best incumbent itself (measured: within 0.1 s). If it has not returned a grace period
  *       later (a single long node), the worker is left to finish in the background and the result
  *       is NO_SOLUTION_FOUND. ojAlgo 56 offers no public way to read its incumbent while it runs
- *       (it is a private field of the solver the model creates internally, and the strategy hooks
- *       that see new incumbents are protected), so none can be returned then.
- *   <li>Progress events carry the elapsed time only, for the same reason.
+ *       (it is a private field of the solver the model creates internally), so none can be
+ *       returned then, except the warm start (below).
+ *   <li>Progress events carry each new incumbent's objective as ojAlgo finds it, and the root LP's
+ *       objective as the bound, seen by wrapping ojAlgo's own branching strategy ({@link
+ *       ProgressStrategy}).
  *   <li>Its INFEASIBLE is no proof once a limit has stopped it. ojAlgo 56.1.1's branch and bound
  *       prunes every node whose LP did not end OPTIMAL as if that LP were infeasible, and an LP cut
  *       short by the time limit (or by a cancel, which sets the limit to zero) ends FEASIBLE or
@@ -99,7 +101,7 @@ public final class OjAlgoBackend implements SolverBackend {
     SolveResult.Builder result = SolveResult.builder(ID, SolveStatus.ERROR);
     try (ProgressTicker ticker = new ProgressTicker(ID, monitor, tick)) {
       ExpressionsBasedModel model = OjAlgoModels.of(milp);
-      configure(model, options, milp.hasIntegers());
+      configure(model, options, milp, ticker);
       Optional<double[]> warm = WarmStart.prepare(milp, options, result);
       warm.ifPresent(x -> OjAlgoModels.setStart(model, x));
       Outcome outcome = run(milp, model, options, ticker);
@@ -117,11 +119,11 @@ public final class OjAlgoBackend implements SolverBackend {
   }
 
   private static void configure(
-      ExpressionsBasedModel model, SolveOptions options, boolean integers) {
+      ExpressionsBasedModel model, SolveOptions options, Milp milp, ProgressTicker ticker) {
     options
         .timeLimit()
         .ifPresent(limit -> model.options.time_abort = abortMillis(limit));
-    if (!integers) {
+    if (!milp.hasIntegers()) {
       return;
     }
     IntegerStrategy.ConfigurableStrategy strategy = IntegerStrategy.DEFAULT;
@@ -130,6 +132,11 @@ public final class OjAlgoBackend implements SolverBackend {
       strategy = strategy.withParallelism(() -> threads);
     }
     strategy = strategy.withGapTolerance(gapContext(options.relativeGap()));
+    double constant = milp.objective().constant();
+    boolean minimise = milp.objective().minimize();
+    strategy =
+        strategy.withModelStrategyFactory(
+            (m, s) -> new ProgressStrategy(m, s, ticker, constant, minimise));
     model.options.integer(strategy);
   }
 
