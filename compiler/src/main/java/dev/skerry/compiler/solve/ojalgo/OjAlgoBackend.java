@@ -229,14 +229,30 @@ public final class OjAlgoBackend implements SolverBackend {
     boolean unexplainedFailure =
         result.status() == SolveStatus.ERROR && outcome.stopped() == StopReason.FINISHED;
     boolean mayBeUnbounded = result.status().hasSolution() && ObjectiveBound.mayBeUnbounded(milp);
-    if (!unexplainedFailure && !mayBeUnbounded) {
+    // ojAlgo's own INFEASIBLE, even from a search no limit stopped, is not proof: on the full rock
+    // field it answered INFEASIBLE in under 3 s (LP relaxation optimal, and SCIP and cbc find
+    // plans), presumably a node LP that failed and was pruned as infeasible. Only an infeasible LP
+    // relaxation confirms it.
+    boolean unconfirmedInfeasible = result.status() == SolveStatus.INFEASIBLE;
+    if (!unexplainedFailure && !mayBeUnbounded && !unconfirmedInfeasible) {
       return;
     }
     ExpressionsBasedModel relaxed = OjAlgoModels.of(milp);
     relaxed.relax();
     Optimisation.State lp =
         (milp.objective().minimize() ? relaxed.minimise() : relaxed.maximise()).getState();
-    if (unexplainedFailure && lp == Optimisation.State.INFEASIBLE) {
+    if (unconfirmedInfeasible) {
+      if (lp != Optimisation.State.INFEASIBLE) {
+        result
+            .status(SolveStatus.NO_SOLUTION_FOUND)
+            .stopReason(StopReason.SOLVER_LIMIT)
+            .warning(
+                "ojAlgo answered INFEASIBLE, but its LP relaxation is not infeasible ("
+                    + lp
+                    + ") and ojAlgo's search counts a node whose LP failed as infeasible: not"
+                    + " taken as proof, reported as no plan found (another solver can confirm)");
+      }
+    } else if (unexplainedFailure && lp == Optimisation.State.INFEASIBLE) {
       result
           .status(SolveStatus.INFEASIBLE)
           .message("ojAlgo's search failed; its LP relaxation is infeasible, so the model is too");
