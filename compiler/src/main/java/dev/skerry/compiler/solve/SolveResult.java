@@ -188,6 +188,11 @@ public record SolveResult(
       return this;
     }
 
+    /** The values set so far, or null. */
+    public double[] values() {
+      return values;
+    }
+
     public SolveStatus status() {
       return status;
     }

@@ -40,6 +40,10 @@ public final class SolveBench {
   private record Run(String example, String who, boolean warm, double seconds, String status, double objective,
       double gap, String note) {}
 
+  /** The in-process backends to run: all by default, or those of {@code -Dskerry.bench.solvers=ojalgo,scip}. */
+  private static final List<String> SOLVERS =
+      List.of(System.getProperty("skerry.bench.solvers", "scip,highs,cpsat,ojalgo,cbc").split(","));
+
   private SolveBench() {}
 
   public static void main(String[] args) throws Exception {
@@ -54,7 +58,10 @@ public final class SolveBench {
       System.err.printf("%s: %d binaries, %d rows%n", name, m.binaryCount(), m.rowCount());
       cbcCli.add(cbcCommandLine(name, m, s.plan().relativeGap(), cap));
       System.err.println("  " + cbcCli.get(cbcCli.size() - 1));
-      for (String id : List.of("scip", "highs", "cpsat", "ojalgo")) {
+      for (String id : SOLVERS) {
+        if (id.equals("cbc")) {
+          continue;
+        }
         // HiGHS is never hinted and CP-SAT gets no heuristic start (its points are only nearly feasible).
         for (boolean warm : id.equals("highs") || id.equals("cpsat") ? List.of(false) : List.of(false, true)) {
           runs.add(inProcess(planner, name, s, id, warm, cap));
@@ -62,7 +69,7 @@ public final class SolveBench {
         }
       }
     }
-    for (String name : names) {
+    for (String name : SOLVERS.contains("cbc") ? names : List.<String>of()) {
       runs.add(inProcess(planner, name, scenario(name), "cbc", false, cap));
       System.err.println("  " + runs.get(runs.size() - 1));
     }

@@ -211,6 +211,12 @@ class KnownOptimaTest {
   void infeasibleModelsAreInfeasible(SolverBackend backend) {
     for (Milp m : new Milp[] {integerInfeasible(), lpInfeasible(), pureLpInfeasible()}) {
       SolveResult r = backend.solve(m, SolveOptions.defaults());
+      if (backend instanceof dev.skerry.compiler.solve.ojalgo.OjAlgoBackend && m.name().equals("integer_infeasible")) {
+        // ojAlgo's INFEASIBLE counts only when the LP relaxation confirms it; here it is feasible
+        assertEquals(SolveStatus.NO_SOLUTION_FOUND, r.status(), r::summary);
+        assertTrue(r.warnings().stream().anyMatch(w -> w.contains("not taken as proof")), r.warnings()::toString);
+        continue;
+      }
       assertEquals(SolveStatus.INFEASIBLE, r.status(), () -> m.name() + ": " + r.summary());
       assertTrue(!r.hasValues(), r::summary);
     }

@@ -44,9 +44,23 @@ import org.ojalgo.type.context.NumberContext;
  *       its best incumbent itself (measured: within 0.1 s). If it has not returned a grace period
  *       later (a single long node), the worker is left to finish in the background and the result
  *       is NO_SOLUTION_FOUND. ojAlgo 56 offers no public way to read its incumbent while it runs
- *       (it is a private field of the solver the model creates internally, and the strategy hooks
- *       that see new incumbents are protected), so none can be returned then.
- *   <li>Progress events carry the elapsed time only, for the same reason.
+ *       (it is a private field of the solver the model creates internally), so none can be
+ *       returned then, except the warm start (below).
+ *   <li>Progress events carry each new incumbent's objective as ojAlgo finds it, and the root LP's
+ *       objective as the bound, seen by wrapping ojAlgo's own branching strategy ({@link
+ *       ProgressStrategy}).
+ *   <li>Its INFEASIBLE is no proof once a limit has stopped it. ojAlgo 56.1.1's branch and bound
+ *       prunes every node whose LP did not end OPTIMAL as if that LP were infeasible, and an LP cut
+ *       short by the time limit (or by a cancel, which sets the limit to zero) ends FEASIBLE or
+ *       UNEXPLORED. When that happens at the root, or to the last open node, no node is left, no
+ *       incumbent exists, and the search ends normally: ojAlgo answers INFEASIBLE for a feasible
+ *       model (measured: the full harbour example at a 9 s limit, the zone-free harbour model the
+ *       warm-start heuristic solves at a 1 s limit). So an INFEASIBLE that comes back after the
+ *       limit or a cancel is reported as no plan found, with a warning. No ojAlgo option avoids it:
+ *       without a limit the trap is gone, but then the fallback could run for hours.
+ *   <li>With a warm start that satisfies the model, a search that ends with nothing better (no
+ *       plan, a wrong INFEASIBLE, a worse point) returns the warm start as FEASIBLE: a plan ojAlgo
+ *       did not prove optimal is still a plan.
  * </ul>
  */
 public final class OjAlgoBackend implements SolverBackend {
@@ -87,12 +101,13 @@ public final class OjAlgoBackend implements SolverBackend {
     SolveResult.Builder result = SolveResult.builder(ID, SolveStatus.ERROR);
     try (ProgressTicker ticker = new ProgressTicker(ID, monitor, tick)) {
       ExpressionsBasedModel model = OjAlgoModels.of(milp);
-      configure(model, options, milp.hasIntegers());
+      configure(model, options, milp, ticker);
       Optional<double[]> warm = WarmStart.prepare(milp, options, result);
       warm.ifPresent(x -> OjAlgoModels.setStart(model, x));
       Outcome outcome = run(milp, model, options, ticker);
       describe(milp, outcome, result);
       crossCheckWithRelaxation(milp, outcome, result);
+      warm.ifPresent(x -> fallBackToStart(milp, x, result));
       if (ticker.monitorFailure() != null) {
         result.warning(ticker.monitorFailure());
       }
@@ -104,11 +119,11 @@ public final class OjAlgoBackend implements SolverBackend {
   }
 
   private static void configure(
-      ExpressionsBasedModel model, SolveOptions options, boolean integers) {
+      ExpressionsBasedModel model, SolveOptions options, Milp milp, ProgressTicker ticker) {
     options
         .timeLimit()
-        .ifPresent(limit -> model.options.time_abort = Math.max(1, limit.toMillis()));
-    if (!integers) {
+        .ifPresent(limit -> model.options.time_abort = abortMillis(limit));
+    if (!milp.hasIntegers()) {
       return;
     }
     IntegerStrategy.ConfigurableStrategy strategy = IntegerStrategy.DEFAULT;
@@ -117,7 +132,22 @@ public final class OjAlgoBackend implements SolverBackend {
       strategy = strategy.withParallelism(() -> threads);
     }
     strategy = strategy.withGapTolerance(gapContext(options.relativeGap()));
+    double constant = milp.objective().constant();
+    boolean minimise = milp.objective().minimize();
+    strategy =
+        strategy.withModelStrategyFactory(
+            (m, s) -> new ProgressStrategy(m, s, ticker, constant, minimise));
     model.options.integer(strategy);
+  }
+
+  /**
+   * ojAlgo's time limit in whole milliseconds, rounded up: ojAlgo's clock starts after ours, so when
+   * ojAlgo stops on its own limit our elapsed time has reached the limit too, and {@link #run} knows
+   * the answer came from a stopped search.
+   */
+  static long abortMillis(Duration limit) {
+    long ms = limit.toMillis();
+    return Math.max(1, limit.minusMillis(ms).isZero() ? ms : ms + 1);
   }
 
   /**
@@ -131,7 +161,7 @@ public final class OjAlgoBackend implements SolverBackend {
   }
 
   /** What came back from the worker, or why nothing did. */
-  private record Outcome(
+  record Outcome(
       Optimisation.Result result, Throwable failure, StopReason stopped, boolean abandoned) {}
 
   private Outcome run(
@@ -199,14 +229,30 @@ public final class OjAlgoBackend implements SolverBackend {
     boolean unexplainedFailure =
         result.status() == SolveStatus.ERROR && outcome.stopped() == StopReason.FINISHED;
     boolean mayBeUnbounded = result.status().hasSolution() && ObjectiveBound.mayBeUnbounded(milp);
-    if (!unexplainedFailure && !mayBeUnbounded) {
+    // ojAlgo's own INFEASIBLE, even from a search no limit stopped, is not proof: on the full rock
+    // field it answered INFEASIBLE in under 3 s (LP relaxation optimal, and SCIP and cbc find
+    // plans), presumably a node LP that failed and was pruned as infeasible. Only an infeasible LP
+    // relaxation confirms it.
+    boolean unconfirmedInfeasible = result.status() == SolveStatus.INFEASIBLE;
+    if (!unexplainedFailure && !mayBeUnbounded && !unconfirmedInfeasible) {
       return;
     }
     ExpressionsBasedModel relaxed = OjAlgoModels.of(milp);
     relaxed.relax();
     Optimisation.State lp =
         (milp.objective().minimize() ? relaxed.minimise() : relaxed.maximise()).getState();
-    if (unexplainedFailure && lp == Optimisation.State.INFEASIBLE) {
+    if (unconfirmedInfeasible) {
+      if (lp != Optimisation.State.INFEASIBLE) {
+        result
+            .status(SolveStatus.NO_SOLUTION_FOUND)
+            .stopReason(StopReason.SOLVER_LIMIT)
+            .warning(
+                "ojAlgo answered INFEASIBLE, but its LP relaxation is not infeasible ("
+                    + lp
+                    + ") and ojAlgo's search counts a node whose LP failed as infeasible: not"
+                    + " taken as proof, reported as no plan found (another solver can confirm)");
+      }
+    } else if (unexplainedFailure && lp == Optimisation.State.INFEASIBLE) {
       result
           .status(SolveStatus.INFEASIBLE)
           .message("ojAlgo's search failed; its LP relaxation is infeasible, so the model is too");
@@ -220,11 +266,51 @@ public final class OjAlgoBackend implements SolverBackend {
     }
   }
 
+  /**
+   * Returns the warm start {@code x} as a FEASIBLE plan when the model accepts it and ojAlgo's
+   * answer is no better: no values (time limit, failure, or an INFEASIBLE the start refutes), or
+   * values with a worse objective. An UNBOUNDED answer is kept (the start does not refute it).
+   */
+  static void fallBackToStart(Milp milp, double[] x, SolveResult.Builder result) {
+    SolveStatus status = result.status();
+    if (status == SolveStatus.UNBOUNDED || status == SolveStatus.OPTIMAL) {
+      return;
+    }
+    if (!(milp.maxViolation(x) <= START_TOLERANCE)) {
+      return;
+    }
+    double start = milp.objective().value(x);
+    if (status.hasSolution()) {
+      double found = milp.objective().value(result.values());
+      boolean better = milp.objective().minimize() ? start < found : start > found;
+      if (!better) {
+        return;
+      }
+    }
+    String was = status.name();
+    result
+        .status(SolveStatus.FEASIBLE)
+        .values(x.clone())
+        .warning(
+            status == SolveStatus.INFEASIBLE
+                ? "ojAlgo answered INFEASIBLE, but the warm start satisfies the model: returning"
+                    + " the warm start (feasible, not proven optimal)"
+                : "ojAlgo found nothing better than the warm start (its answer: "
+                    + was
+                    + "): returning the warm start (feasible, not proven optimal)");
+    if (status == SolveStatus.INFEASIBLE || status == SolveStatus.ERROR) {
+      result.stopReason(StopReason.SOLVER_LIMIT);
+    }
+  }
+
+  /** The largest violation of the model a warm start may have to be returned as a plan. */
+  static final double START_TOLERANCE = 1e-6;
+
   private static boolean reached(SolveOptions options, Duration elapsed) {
     return options.timeLimit().map(limit -> elapsed.compareTo(limit) >= 0).orElse(false);
   }
 
-  private static void describe(Milp milp, Outcome outcome, SolveResult.Builder result) {
+  static void describe(Milp milp, Outcome outcome, SolveResult.Builder result) {
     if (outcome.abandoned()) {
       result
           .status(SolveStatus.NO_SOLUTION_FOUND)
@@ -248,7 +334,21 @@ public final class OjAlgoBackend implements SolverBackend {
           result
               .status(SolveStatus.FEASIBLE)
               .stopReason(stopped ? outcome.stopped() : StopReason.SOLVER_LIMIT);
-      case INFEASIBLE -> result.status(SolveStatus.INFEASIBLE).stopReason(StopReason.FINISHED);
+      case INFEASIBLE -> {
+        if (stopped) {
+          // ojAlgo prunes nodes whose LP the limit cut short as infeasible: see the class comment
+          result
+              .status(SolveStatus.NO_SOLUTION_FOUND)
+              .stopReason(outcome.stopped())
+              .warning(
+                  "ojAlgo answered INFEASIBLE after it was stopped ("
+                      + outcome.stopped().name().toLowerCase(java.util.Locale.ROOT)
+                      + "); it counts a node whose LP the stop cut short as infeasible, so that is"
+                      + " no proof: reported as no plan found");
+        } else {
+          result.status(SolveStatus.INFEASIBLE).stopReason(StopReason.FINISHED);
+        }
+      }
       case UNBOUNDED -> result.status(SolveStatus.UNBOUNDED).stopReason(StopReason.FINISHED);
       default -> {
         if (stopped) {
