@@ -85,7 +85,7 @@ class LimitsAndCancelTest {
     SolveOptions chosen = options;
     List<SolveProgress> events = new CopyOnWriteArrayList<>();
     SolverBackend ticking = withTick(backend, Duration.ofMillis(50));
-    Milp model = backend instanceof OjAlgoBackend ? TrajectoryMilps.shortHop() : HARD;
+    Milp model = backend instanceof OjAlgoBackend ? TrajectoryMilps.randomZones(16, 10, 7) : HARD;
     CompletableFuture<SolveResult> running =
         CompletableFuture.supplyAsync(() -> ticking.solve(model, chosen, events::add));
     Thread.sleep(500);
