@@ -171,14 +171,17 @@ final class FileNames {
 
   static FileNames forMps(Milp milp, boolean fixed, boolean constantColumn) {
     int maxLength = fixed ? FIXED_MPS_LENGTH : FREE_MPS_LENGTH;
-    Kept kept = Kept.of(milp, name -> validMps(name, maxLength));
+    java.util.function.Predicate<String> valid = name -> validMps(name, maxLength);
+    // Only kept names that a made-up name could equal need a look-up; a name is kept when it is
+    // valid, which needs no set at all.
+    Kept kept = Kept.of(milp, valid, FileNames::couldBeMadeUpForMps);
     NameMap.Builder map = new NameMap.Builder();
     List<Variable> variables = milp.variables();
     String[] columns = new String[variables.size()];
     int columnAliases = 0;
     for (int j = 0; j < columns.length; j++) {
       String name = variables.get(j).name();
-      if (kept.columns.contains(name)) {
+      if (valid.test(name)) {
         columns[j] = name;
       } else {
         columnAliases = nextAlias('C', columnAliases, kept, maxLength);
@@ -191,7 +194,7 @@ final class FileNames {
     int rowAliases = 0;
     for (int i = 0; i < rows.length; i++) {
       String name = rowList.get(i).name();
-      if (kept.rows.contains(name)) {
+      if (valid.test(name)) {
         rows[i] = name;
       } else {
         rowAliases = nextAlias('R', rowAliases, kept, maxLength);
@@ -202,6 +205,29 @@ final class FileNames {
     String objective = firstFree("OBJ", kept.rows, Set.of());
     String constant = constantColumn ? firstFree("OBJCONST", kept.columns, Set.of()) : null;
     return new FileNames(columns, rows, null, objective, constant, null, map.build());
+  }
+
+  /**
+   * True when {@code name} has the shape of a name {@link #forMps} makes up: an alias ({@code C} or
+   * {@code R} and at least seven digits) or an objective row or constant column name (at most 8
+   * characters, see {@link #firstFree}).
+   */
+  private static boolean couldBeMadeUpForMps(String name) {
+    int length = name.length();
+    if (length <= 8) {
+      return true;
+    }
+    char first = name.charAt(0);
+    if (first != 'C' && first != 'R') {
+      return false;
+    }
+    for (int i = 1; i < length; i++) {
+      char c = name.charAt(i);
+      if (c < '0' || c > '9') {
+        return false;
+      }
+    }
+    return true;
   }
 
   private static int nextAlias(char prefix, int last, Kept kept, int maxLength) {
@@ -322,7 +348,11 @@ final class FileNames {
     return name;
   }
 
-  /** The model names a format keeps as they are. */
+  /**
+   * The model names a format keeps as they are; or, when made with a filter, those of them the
+   * filter accepts (enough to tell whether a made-up name is taken, if the filter accepts every
+   * name that could be made up).
+   */
   private record Kept(Set<String> columns, Set<String> rows) {
     static Kept of(Milp milp, java.util.function.Predicate<String> valid) {
       Set<String> columns = new HashSet<>(Math.max(16, milp.columnCount() * 2));
@@ -334,6 +364,26 @@ final class FileNames {
       Set<String> rows = new HashSet<>(Math.max(16, milp.rowCount() * 2));
       for (Row r : milp.rows()) {
         if (valid.test(r.name())) {
+          rows.add(r.name());
+        }
+      }
+      return new Kept(columns, rows);
+    }
+
+    /** The kept names that {@code filter} accepts. */
+    static Kept of(
+        Milp milp,
+        java.util.function.Predicate<String> valid,
+        java.util.function.Predicate<String> filter) {
+      Set<String> columns = new HashSet<>();
+      for (Variable v : milp.variables()) {
+        if (filter.test(v.name()) && valid.test(v.name())) {
+          columns.add(v.name());
+        }
+      }
+      Set<String> rows = new HashSet<>();
+      for (Row r : milp.rows()) {
+        if (filter.test(r.name()) && valid.test(r.name())) {
           rows.add(r.name());
         }
       }

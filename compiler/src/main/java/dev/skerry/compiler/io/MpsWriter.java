@@ -96,6 +96,7 @@ public final class MpsWriter {
     private final FileNames names;
     private final ColumnMajor matrix;
     private final double[] cost;
+    private final FreeNumbers numbers = new FreeNumbers();
     private TextSink out;
     private String openFirst;
 
@@ -209,15 +210,12 @@ public final class MpsWriter {
         String column = names.columns[j];
         boolean any = false;
         if (cost[j] != 0) {
-          entry(
-              column,
-              names.objectiveRow,
-              number(cost[j], "objective coefficient of column", v, -1));
+          entry(column, names.objectiveRow, cost[j], "objective coefficient of column", v, -1);
           any = true;
         }
         for (int k = matrix.start[j]; k < matrix.start[j + 1]; k++) {
           int row = matrix.rows[k];
-          entry(column, names.rows[row], number(matrix.values[k], "coefficient of column", v, row));
+          entry(column, names.rows[row], matrix.values[k], "coefficient of column", v, row);
           any = true;
         }
         if (!any) {
@@ -229,10 +227,7 @@ public final class MpsWriter {
         marker("'INTEND'");
       }
       if (names.constantColumn != null) {
-        entry(
-            names.constantColumn,
-            names.objectiveRow,
-            number(constant, "objective constant", null, -1));
+        entry(names.constantColumn, names.objectiveRow, constant, "objective constant", null, -1);
         closeEntries();
       }
     }
@@ -263,7 +258,7 @@ public final class MpsWriter {
         }
         double value = form.rhs(r);
         if (Double.compare(value, 0.0) != 0) {
-          entry(RHS_SET, names.rows[i], number(value, "right-hand side", null, i));
+          entry(RHS_SET, names.rows[i], value, "right-hand side", null, i);
         }
       }
       closeEntries();
@@ -350,6 +345,32 @@ public final class MpsWriter {
       out.endLine();
     }
 
+    /**
+     * One (row, number) pair: in free MPS the number goes straight into the line, with no string
+     * of its own; in fixed MPS, as {@link #number} spells it (the other arguments say where it is,
+     * for that method's error).
+     */
+    private void entry(String first, String row, double value, String what, Variable column, int rowIndex)
+        throws IOException {
+      if (fixed) {
+        entry(first, row, number(value, what, column, rowIndex));
+        return;
+      }
+      boolean second = openFirst != null && openFirst.equals(first);
+      if (!second) {
+        closeEntries();
+        out.append("    ").append(first);
+      }
+      out.append("  ").append(row).append("  ");
+      numbers.append(value, out.text());
+      if (second) {
+        out.endLine();
+        openFirst = null;
+      } else {
+        openFirst = first;
+      }
+    }
+
     /** One (row, value) pair of a COLUMNS, RHS or RANGES line; two pairs share a line. */
     private void entry(String first, String row, String value) throws IOException {
       if (openFirst != null && openFirst.equals(first)) {
@@ -381,7 +402,7 @@ public final class MpsWriter {
     /** A number as text; in fixed MPS, refuses one that cannot fit, naming where it is. */
     private String number(double v, String what, Variable column, int row) {
       if (!fixed) {
-        return NumberText.free(v);
+        return numbers.text(v);
       }
       String text = NumberText.fixed(v);
       if (text == null) {

@@ -25,7 +25,7 @@ final class NumberText {
 
   /** Appends a finite number in a form that reads back exactly (free MPS and LP). */
   static void appendFree(double v, StringBuilder out) {
-    if (v == Math.rint(v) && Math.abs(v) < LONG_SAFE) {
+    if (isWhole(v)) {
       if (v == 0 && Double.doubleToRawLongBits(v) != 0) {
         out.append("-0");
       } else {
@@ -34,6 +34,11 @@ final class NumberText {
     } else {
       out.append(Double.toString(v));
     }
+  }
+
+  /** True when {@link #appendFree} writes {@code v} as a whole number, without {@code Double.toString}. */
+  static boolean isWhole(double v) {
+    return v == Math.rint(v) && Math.abs(v) < LONG_SAFE;
   }
 
   /** {@code -v}, but never a negative zero: negating twice gives back the same value. */

@@ -1,6 +1,7 @@
 package dev.skerry.compiler.io;
 
 import java.io.IOException;
+import java.io.Writer;
 
 /**
  * Lines of text collected in a small buffer and handed to an {@link Appendable} in chunks, so a
@@ -12,6 +13,8 @@ final class TextSink {
 
   private final Appendable out;
   private final StringBuilder buffer = new StringBuilder(256);
+  /** For a {@link Writer} target: the chunk copied out once, not turned into a string first. */
+  private char[] chars;
   private int lineStart;
 
   private TextSink(Appendable out) {
@@ -68,7 +71,14 @@ final class TextSink {
   }
 
   void flush() throws IOException {
-    if (out != null) {
+    if (out instanceof Writer writer) {
+      int length = buffer.length();
+      if (chars == null || chars.length < length) {
+        chars = new char[Math.max(length, CHUNK + 256)];
+      }
+      buffer.getChars(0, length, chars, 0);
+      writer.write(chars, 0, length);
+    } else if (out != null) {
       out.append(buffer);
     }
     buffer.setLength(0);

@@ -58,37 +58,51 @@ public final class LinearExpr {
     return size;
   }
 
+  /** Terms of a row or objective: distinct ascending columns, no zero coefficient. */
+  record Terms(int[] cols, double[] coefs) {}
+
   /**
-   * The merged terms, sorted by column, zero coefficients kept out: element 0 the columns,
-   * element 1 the coefficients.
+   * The merged terms, sorted by column, zero coefficients kept out. Repeated terms of one column
+   * are summed in the order they were added. Most rows are built in column order without repeats
+   * and take the first branch, which only copies the two arrays.
    */
-  Object[] merged() {
-    Integer[] order = new Integer[size];
-    for (int i = 0; i < size; i++) {
-      order[i] = i;
+  Terms merged() {
+    int n = size;
+    boolean plain = true;
+    for (int i = 0; i < n && plain; i++) {
+      plain = coefs[i] != 0 && (i == 0 || cols[i] > cols[i - 1]);
     }
-    Arrays.sort(order, (a, b) -> Integer.compare(cols[a], cols[b]));
-    int[] outCols = new int[size];
-    double[] outCoefs = new double[size];
-    int n = 0;
-    for (int k = 0; k < size; k++) {
-      int i = order[k];
-      if (n > 0 && outCols[n - 1] == cols[i]) {
-        outCoefs[n - 1] += coefs[i];
-      } else {
-        outCols[n] = cols[i];
-        outCoefs[n] = coefs[i];
-        n++;
-      }
+    if (plain) {
+      return new Terms(Arrays.copyOf(cols, n), Arrays.copyOf(coefs, n));
     }
-    int m = 0;
+    // Sort (column, position) pairs packed in longs: the position breaks ties, so terms of one
+    // column stay in the order they were added and their sum does not depend on the sort.
+    long[] order = new long[n];
     for (int i = 0; i < n; i++) {
-      if (outCoefs[i] != 0) {
-        outCols[m] = outCols[i];
-        outCoefs[m] = outCoefs[i];
+      order[i] = ((long) cols[i] << 32) | i;
+    }
+    Arrays.sort(order);
+    int[] outCols = new int[n];
+    double[] outCoefs = new double[n];
+    int m = 0;
+    for (int k = 0; k < n; k++) {
+      int i = (int) order[k];
+      if (m > 0 && outCols[m - 1] == cols[i]) {
+        outCoefs[m - 1] += coefs[i];
+      } else {
+        outCols[m] = cols[i];
+        outCoefs[m] = coefs[i];
         m++;
       }
     }
-    return new Object[] {Arrays.copyOf(outCols, m), Arrays.copyOf(outCoefs, m)};
+    int kept = 0;
+    for (int i = 0; i < m; i++) {
+      if (outCoefs[i] != 0) {
+        outCols[kept] = outCols[i];
+        outCoefs[kept] = outCoefs[i];
+        kept++;
+      }
+    }
+    return new Terms(Arrays.copyOf(outCols, kept), Arrays.copyOf(outCoefs, kept));
   }
 }

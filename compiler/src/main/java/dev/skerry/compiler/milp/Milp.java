@@ -13,13 +13,29 @@ public final class Milp {
   private final List<Variable> variables;
   private final List<Row> rows;
   private final Objective objective;
+  private final boolean namesChecked;
   private Map<String, Variable> byName;
 
   public Milp(String name, List<Variable> variables, List<Row> rows, Objective objective) {
+    this(name, variables, rows, objective, false);
+  }
+
+  Milp(String name, List<Variable> variables, List<Row> rows, Objective objective, boolean namesChecked) {
     this.name = name;
     this.variables = List.copyOf(variables);
     this.rows = List.copyOf(rows);
     this.objective = objective;
+    this.namesChecked = namesChecked;
+  }
+
+  /**
+   * True when the model comes from a {@link MilpBuilder}, which has checked as it went that column
+   * names are unique and row names are unique; false for a model put together by other means,
+   * whose writer must check that itself. (Numbers and column indices are not covered: writers
+   * check those in every case.)
+   */
+  public boolean namesChecked() {
+    return namesChecked;
   }
 
   public String name() {

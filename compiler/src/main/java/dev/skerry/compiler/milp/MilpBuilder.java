@@ -1,9 +1,7 @@
 package dev.skerry.compiler.milp;
 
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
-import java.util.Set;
 
 /**
  * Builds a {@link Milp} the way one writes the maths: {@code newContinuous}, {@code newBinary},
@@ -14,8 +12,8 @@ public final class MilpBuilder {
   private final String name;
   private final List<Variable> variables = new ArrayList<>();
   private final List<Row> rows = new ArrayList<>();
-  private final Set<String> names = new HashSet<>();
-  private final Set<String> rowNames = new HashSet<>();
+  private final NameSet names = new NameSet();
+  private final NameSet rowNames = new NameSet();
   private Objective objective = Objective.zero();
 
   public MilpBuilder(String name) {
@@ -67,22 +65,21 @@ public final class MilpBuilder {
     if (Double.isNaN(lower) || Double.isNaN(upper)) {
       throw new IllegalArgumentException("row " + rowName + " has a NaN bound");
     }
-    Object[] merged = expr.merged();
+    LinearExpr.Terms terms = expr.merged();
     double c = expr.constant();
-    Row row =
-        new Row(rows.size(), rowName, (int[]) merged[0], (double[]) merged[1], lower - c, upper - c, origin);
+    Row row = new Row(rows.size(), rowName, terms.cols(), terms.coefs(), lower - c, upper - c, origin);
     rows.add(row);
     return row;
   }
 
   public void minimize(LinearExpr expr) {
-    Object[] merged = expr.merged();
-    objective = new Objective(true, (int[]) merged[0], (double[]) merged[1], expr.constant());
+    LinearExpr.Terms terms = expr.merged();
+    objective = new Objective(true, terms.cols(), terms.coefs(), expr.constant());
   }
 
   public void maximize(LinearExpr expr) {
-    Object[] merged = expr.merged();
-    objective = new Objective(false, (int[]) merged[0], (double[]) merged[1], expr.constant());
+    LinearExpr.Terms terms = expr.merged();
+    objective = new Objective(false, terms.cols(), terms.coefs(), expr.constant());
   }
 
   public int columnCount() {
@@ -93,7 +90,11 @@ public final class MilpBuilder {
     return rows.size();
   }
 
+  /**
+   * The model, marked as {@link Milp#namesChecked() names checked}: this builder has already refused
+   * repeated names, so writers need not look for them again.
+   */
   public Milp build() {
-    return new Milp(name, variables, rows, objective);
+    return new Milp(name, variables, rows, objective, true);
   }
 }
