@@ -46,6 +46,12 @@ public final class Planner {
     return new Planner(Backends.standard());
   }
 
+  /** {@code run} with the time a failed warm-start search took taken off the limit, so the limit holds. */
+  private static SolveOptions lessTime(SolveOptions run, SolveOptions options, WarmStarts.Start start) {
+    Duration left = options.timeLimit().map(l -> l.minus(start.wallTime())).orElse(null);
+    return left == null ? run : run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
+  }
+
   /** The least time the solve proper is left after a warm start that used up the limit. */
   private static final Duration MIN_TIME_LEFT = Duration.ofMillis(100);
 
@@ -101,11 +107,23 @@ public final class Planner {
         notes.add("warm start: the previous plan shifted by one step");
       }
     }
-    if (warmStart && s.fleet() && backend.takesWarmStart() && run.warmStart().isEmpty()) {
-      // Each restricted solve of a fleet keeps every separation binary, so the heuristic costs
-      // more than it saves: on examples/twin_skiffs.skerry SCIP took 12.2 s with it and 5.5 s
-      // without (same optimum, one run side by side).
-      notes.add("no warm start: the zone-by-zone heuristic is not used for a fleet");
+    if (warmStart && s.fleet() && backend.takesWarmStart() && backend.exact() && run.warmStart().isEmpty()) {
+      // The zone-by-zone heuristic keeps every separation binary in each restricted solve and cost
+      // more than it saved on a fleet (twin_skiffs: 12.2 s with it, 5.5 s without); planning the
+      // vehicles one after another costs about one single-vehicle solve per vehicle instead.
+      WarmStarts.Start start = FleetStarts.find(s, milp, backend, options, WARM_START_CAP);
+      if (start.found()) {
+        run = options.withWarmStart(start.values());
+        Duration left = options.timeLimit().map(l -> l.minus(start.wallTime())).orElse(null);
+        if (left != null) {
+          run = run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
+        }
+        notes.add(String.format(Locale.ROOT, "warm start: vehicles planned one after another, objective %.6g"
+            + " in %.2f s", start.objective(), start.wallTime().toNanos() / 1e9));
+      } else {
+        run = lessTime(run, options, start);
+        notes.add("no warm start: " + start.reason());
+      }
     } else if (warmStart && backend.takesWarmStart() && backend.exact() && run.warmStart().isEmpty()) {
       WarmStarts.Start start = WarmStarts.find(milp, backend, options, WARM_START_CAP);
       if (start.found()) {
@@ -117,6 +135,7 @@ public final class Planner {
         notes.add(String.format(Locale.ROOT, "warm start: objective %.6g found in %.2f s (%d zones needed)",
             start.objective(), start.wallTime().toNanos() / 1e9, start.zonesUsed()));
       } else {
+        run = lessTime(run, options, start);
         notes.add("no warm start: " + start.reason());
       }
     }

@@ -213,7 +213,7 @@ public final class WarmStarts {
     return v.origin().role().equals("avoid-binary");
   }
 
-  private static Duration capped(SolveOptions options, Duration cap) {
+  static Duration capped(SolveOptions options, Duration cap) {
     Optional<Duration> limit = options.timeLimit();
     if (limit.isEmpty()) {
       return cap;
@@ -223,7 +223,7 @@ public final class WarmStarts {
     return d.isZero() ? Duration.ofMillis(1) : d;
   }
 
-  private static Duration since(long t0) {
+  static Duration since(long t0) {
     return Duration.ofNanos(System.nanoTime() - t0);
   }
 

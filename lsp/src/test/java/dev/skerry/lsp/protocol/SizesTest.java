@@ -125,4 +125,45 @@ class SizesTest {
       assertTrue(hover.contains(String.format(java.util.Locale.ROOT, "binaries it adds: %,d", expected)), hover);
     }
   }
+
+  /**
+   * A fleet in 3-D: the hint is the compiler's count, separation binaries included, and the plan
+   * hover says clusters are not offered in 3-D (and no action suggests them).
+   */
+  @Test
+  void aThreeDimensionalFleetShowsTheCompilersCountAndNoClusteringOffer() throws Exception {
+    String text = """
+        vehicle a { start (5, 5, 10) at rest speed max 2 m/s accel max 1 m/s^2 climb max 1 m/s radius 1 m }
+        vehicle b { start (5, 40, 10) at rest speed max 2 m/s accel max 1 m/s^2 climb max 1 m/s radius 1 m }
+        area sea box (0, 0, 0) to (60, 50, 30)
+        zone mast box (20, 15) to (24, 30) altitude 0 m to 20 m
+        target east box (50, 20) to (56, 26) at rest
+        target west box (50, 35) to (56, 41) at rest
+        plan {
+          step 2 s
+          horizon 20
+          dimensions 3
+          separation 4 m
+        }
+        """;
+    try (Harness h = new Harness(dir, Duration.ofMillis(20), new dev.skerry.lsp.analysis.AnalysisSizes())) {
+      String uri = h.open("fleet.skerry", text);
+      assertEquals(List.of(), h.diagnostics(uri, 1).getDiagnostics());
+      Range all = new Range(Marked.position(text, 0), Marked.position(text, text.length()));
+      List<InlayHint> hints = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(Harness.doc(uri), all))
+          .get(5, TimeUnit.SECONDS);
+      var checked = dev.skerry.compiler.check.ScenarioChecker.check(
+          dev.skerry.compiler.source.SourceFile.of(dir.resolve("fleet.skerry"), text),
+          new dev.skerry.compiler.check.DiskLoader(dir));
+      var sizes = dev.skerry.compiler.analysis.Analysis.sizes(checked.scenario());
+      assertTrue(sizes.separationBinaries() > 0, sizes.toString());
+      assertEquals(String.format(java.util.Locale.ROOT, "binaries %,d · continuous %,d · rows %,d", sizes.binaries(),
+          sizes.continuous(), sizes.rows()), hints.get(0).getLabel().getLeft());
+      String plan = h.remote.getTextDocumentService().hover(new HoverParams(Harness.doc(uri),
+          Marked.position(text, text.indexOf("horizon")))).get(5, TimeUnit.SECONDS).getContents().getRight().getValue();
+      assertTrue(plan.contains("clusters: not available in 3-D"), plan);
+      assertTrue(plan.contains("fleet of 2 vehicles, at least 4 m apart"), plan);
+      assertEquals(List.of(), actions(h, uri, text));
+    }
+  }
 }

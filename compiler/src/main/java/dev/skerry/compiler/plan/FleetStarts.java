@@ -1,0 +1,128 @@
+package dev.skerry.compiler.plan;
+
+import dev.skerry.compiler.lower.Lowering;
+import dev.skerry.compiler.milp.Milp;
+import dev.skerry.compiler.milp.Variable;
+import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Target;
+import dev.skerry.compiler.model.Vehicle;
+import dev.skerry.compiler.solve.SolveOptions;
+import dev.skerry.compiler.solve.SolveResult;
+import dev.skerry.compiler.solve.SolverBackend;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * A warm start for a fleet by planning its vehicles one after another (prioritised planning, common
+ * practice): round i lowers the scenario with the first i vehicles, fixes the states and inputs of
+ * the first i−1 to the previous round's plan, and finds a plan for vehicle i, which must keep clear
+ * of the earlier vehicles' fixed paths and take a target they left: by the zone-by-zone heuristic of
+ * {@link WarmStarts} (the earlier vehicles' rows are fixed data, so its restricted models hold one
+ * vehicle's nearby zones), else by solving the round's model. Each round gets an equal share of
+ * the time limit (one share is left for the solve proper) and costs about one vehicle alone. The last round's model is the full model
+ * with all but the last vehicle fixed: its solution is a point of the full model, handed back only
+ * when the full model accepts it. An earlier vehicle's fixed path may leave a later one no way
+ * through; then there is no start and the reason says which round failed.
+ */
+public final class FleetStarts {
+  /** Roles of the columns that fix a vehicle's path: states and inputs, plan view and altitude. */
+  private static final Set<String> PATH = Set.of("px", "py", "vx", "vy", "ux", "uy", "pz", "vz", "uz");
+
+  private FleetStarts() {}
+
+  /** A start for {@code model} (the lowered {@code s}), each round's solve capped at {@code cap}. */
+  public static WarmStarts.Start find(Scenario s, Milp model, SolverBackend backend, SolveOptions options,
+      Duration cap) {
+    long t0 = System.nanoTime();
+    try {
+      int n = s.vehicles().size();
+      Duration perRound = options.timeLimit().map(l -> l.dividedBy(n + 1)).orElse(cap.multipliedBy(2));
+      SolveOptions sub = options.withWarmStart(null).withTimeLimit(perRound);
+      Milp previous = null;
+      double[] values = null;
+      Set<String> fixed = new HashSet<>();
+      for (int i = 1; i <= n; i++) {
+        if (options.cancel().isCancelled()) {
+          return none(t0, i - 1, "cancelled");
+        }
+        Milp round = Lowering.lower(firstVehicles(s, i));
+        if (previous != null) {
+          round = fix(round, previous, values, fixed);
+        }
+        // The zone-by-zone heuristic first: with the earlier vehicles fixed, its restricted models
+        // hold one vehicle's nearby zones only; the round's whole model when it finds nothing.
+        WarmStarts.Start lazy = WarmStarts.find(round, backend, sub, cap);
+        if (lazy.found()) {
+          values = lazy.values();
+        } else {
+          SolveResult r = backend.solve(round, sub);
+          if (!r.status().hasSolution()) {
+            return none(t0, i, "vehicle " + s.vehicles().get(i - 1).name() + " after the earlier ones: " + r.summary());
+          }
+          values = r.values();
+        }
+        previous = round;
+        fixed.add(s.vehicles().get(i - 1).name());
+      }
+      if (previous.columnCount() != model.columnCount()) {
+        return none(t0, n, "the last round's model differs from the full one");
+      }
+      double violation = model.maxViolation(values);
+      if (!(violation <= WarmStarts.TOLERANCE)) {
+        return none(t0, n, "the start violates the model by " + violation);
+      }
+      return new WarmStarts.Start(values, model.objective().value(values), WarmStarts.since(t0), n, 0, "");
+    } catch (RuntimeException e) {
+      return none(t0, 0, "heuristic failed: " + e);
+    }
+  }
+
+  /**
+   * The scenario with its first {@code count} vehicles; targets named by the vehicles left out are
+   * dropped too, so a vehicle that names none cannot take a target a later vehicle needs.
+   */
+  static Scenario firstVehicles(Scenario s, int count) {
+    List<Vehicle> kept = s.vehicles().subList(0, count);
+    Set<String> namedLater = new HashSet<>();
+    for (Vehicle v : s.vehicles().subList(count, s.vehicles().size())) {
+      if (v.target() != null) {
+        namedLater.add(v.target());
+      }
+    }
+    List<Target> targets = new ArrayList<>();
+    for (Target t : s.targets()) {
+      if (!namedLater.contains(t.name())) {
+        targets.add(t);
+      }
+    }
+    return s.withVehiclesAndTargets(kept, targets);
+  }
+
+  /** {@link #firstVehicles}, for tests in other packages. */
+  public static Scenario firstVehiclesForTest(Scenario s, int count) {
+    return firstVehicles(s, count);
+  }
+
+  /** {@code round} with the path columns of the vehicles in {@code vehicles} fixed to their values in the earlier round. */
+  private static Milp fix(Milp round, Milp earlier, double[] values, Set<String> vehicles) {
+    List<Variable> vars = new ArrayList<>(round.columnCount());
+    for (Variable v : round.variables()) {
+      Variable then = PATH.contains(v.origin().role()) && vehicles.contains(v.origin().entity())
+          ? earlier.variable(v.name()) : null;
+      if (then == null) {
+        vars.add(v);
+      } else {
+        double x = Math.max(v.lower(), Math.min(v.upper(), values[then.index()]));
+        vars.add(new Variable(v.index(), v.name(), v.type(), x, x, v.origin()));
+      }
+    }
+    return new Milp(round.name(), vars, round.rows(), round.objective());
+  }
+
+  private static WarmStarts.Start none(long t0, int rounds, String reason) {
+    return new WarmStarts.Start(null, Double.NaN, WarmStarts.since(t0), rounds, 0, reason);
+  }
+}
