@@ -29,9 +29,11 @@ import org.junit.jupiter.params.provider.ValueSource;
  * SCIP's optimum of the same model in process (the solve {@code skerry solve} does). SCIP runs with
  * the default relative gap of 1e-6 and cbc proves optimality, so they must agree within that gap.
  *
- * <p>By default only the warehouse example runs (cbc needs about 7 s on it here). The harbour and
- * rock-field examples take cbc about a minute and a half each on a 2-core machine, so they run only
- * with {@code -Dskerry.slow=true}, each with a 10-minute limit on the cbc process.
+ * <p>By default the warehouse (cbc about 7 s here, glpsol about 40 s), twin-skiff (cbc about 30 s)
+ * and ridge (cbc and glpsol, under a second each) examples run. The harbour and rock-field
+ * examples take cbc about a minute and a half each on a 2-core machine, and glpsol takes about 80 s
+ * on the twin skiffs, so those run only with {@code -Dskerry.slow=true}, each with a 10-minute limit
+ * on the cbc process.
  */
 class ExampleCrossCheckTest {
   private static final Path EXAMPLES = Path.of("..", "examples").toAbsolutePath().normalize();
@@ -60,6 +62,54 @@ class ExampleCrossCheckTest {
     double inProcess = InProcess.scip(milp, SolveOptions.DEFAULT_RELATIVE_GAP).objective();
     assertTrue(Math.abs(outside - inProcess) <= 1e-9 + 1e-6 * Math.max(Math.abs(outside), Math.abs(inProcess)),
         "glpsol on our LP file gives " + outside + ", SCIP in process " + inProcess);
+  }
+
+  /** The twin-skiff fleet example: cbc proves its optimum in about 30 s here. */
+  @Test
+  void twinSkiffsFileSolvedByCbcMatchesInProcessScip() throws Exception {
+    crossCheck("twin_skiffs", 300);
+  }
+
+  /**
+   * The 3-D ridge example, small enough for every outside reading: cbc 2.10 on the free MPS file,
+   * glpsol 5.0 on the LP file and on the free MPS file (under a second each here).
+   */
+  @Test
+  void ridgeDroneFilesSolvedByCbcAndGlpsolMatchInProcessScip() throws Exception {
+    crossCheck("ridge_drone", 120);
+    Milp milp = lowered("ridge_drone");
+    double inProcess = InProcess.scip(milp, SolveOptions.DEFAULT_RELATIVE_GAP).objective();
+    for (ModelFormat format : new ModelFormat[] {ModelFormat.LP, ModelFormat.MPS}) {
+      Path file = folder.resolve("ridge_drone" + format.extension());
+      WriteSummary summary = ModelFiles.write(milp, file, format).summary();
+      OutsideSolvers.Result glpsol = OutsideSolvers.glpsolObjective(file, format);
+      assertEquals(OutsideSolvers.Status.OPTIMAL, glpsol.status(), format + ": glpsol said " + glpsol.detail());
+      double outside = summary.modelObjective(glpsol.objective());
+      assertTrue(Math.abs(outside - inProcess) <= 1e-9 + 1e-6 * Math.max(Math.abs(outside), Math.abs(inProcess)),
+          format + ": glpsol gives " + outside + ", SCIP in process " + inProcess);
+    }
+  }
+
+  /** glpsol on the twin-skiff LP file takes about 80 s here: opt-in. */
+  @Test
+  @EnabledIfSystemProperty(named = "skerry.slow", matches = "true")
+  void twinSkiffsLpFileSolvedByGlpsolMatchesInProcessScip() throws Exception {
+    Milp milp = lowered("twin_skiffs");
+    Path lp = folder.resolve("twin_skiffs.lp");
+    WriteSummary summary = ModelFiles.write(milp, lp, ModelFormat.LP).summary();
+    OutsideSolvers.Result glpsol = OutsideSolvers.glpsolObjective(lp, ModelFormat.LP);
+    assertEquals(OutsideSolvers.Status.OPTIMAL, glpsol.status(), "glpsol said " + glpsol.detail());
+    double outside = summary.modelObjective(glpsol.objective());
+    double inProcess = InProcess.scip(milp, SolveOptions.DEFAULT_RELATIVE_GAP).objective();
+    assertTrue(Math.abs(outside - inProcess) <= 1e-9 + 1e-6 * Math.max(Math.abs(outside), Math.abs(inProcess)),
+        "glpsol gives " + outside + ", SCIP in process " + inProcess);
+  }
+
+  private static Milp lowered(String example) throws Exception {
+    Path file = EXAMPLES.resolve(example + ".skerry");
+    CheckResult checked = ScenarioChecker.check(SourceFile.of(file, Files.readString(file)), new DiskLoader(EXAMPLES));
+    assertFalse(checked.hasErrors(), checked.diagnostics().toString());
+    return Lowering.lower(checked.scenario());
   }
 
   @ParameterizedTest(name = "{0}")
