@@ -48,17 +48,9 @@ public final class ClusterBench {
     double gap = args.length > 1 ? Double.parseDouble(args[1]) : 1e-4;
     int maxClusters = args.length > 2 ? Integer.parseInt(args[2]) : 5;
     Path file = Path.of(args.length > 3 ? args[3] : "examples/rock_field.skerry").toAbsolutePath().normalize();
-    CheckResult checked = ScenarioChecker.check(SourceFile.of(file, Files.readString(file)),
-        new DiskLoader(file.getParent()));
-    if (checked.scenario() == null) {
-      throw new IllegalStateException("scenario " + file + " did not check: " + checked.diagnostics());
-    }
-    Scenario base = checked.scenario();
-    SolveOptions options = SolveOptions.defaults().withRelativeGap(gap)
-        .withTimeLimit(Duration.ofMillis(Math.round(cap * 1000)));
-    System.out.printf(Locale.ROOT, "# %s: %d zones, horizon %d, SCIP, gap %g, cap %.0f s, %d cores%n",
-        file.getFileName(), base.zones().size(), base.plan().horizon(), gap, cap,
-        Runtime.getRuntime().availableProcessors());
+    Scenario base = load(file);
+    SolveOptions options = capped(gap, cap);
+    header(file, base, gap, cap);
     List<Row> rows = new ArrayList<>();
     rows.add(run("none", base.withPlan(base.plan().withClusters(0, SymmetryRule.NONE)), options));
     System.out.println("| clusters | binaries | status | wall s | speed-up (wall) | CPU s | speed-up (CPU) | cost"
@@ -89,6 +81,28 @@ public final class ClusterBench {
       verified = Verifier.verify(s, PlanExtractor.trajectory(s, milp, r.values())).ok() ? "yes" : "NO";
     }
     return new Row(label, binaries, r, cpu, used, verified);
+  }
+
+  /** The checked scenario of an example file; a file that does not check stops the benchmark. */
+  static Scenario load(Path file) throws java.io.IOException {
+    CheckResult checked = ScenarioChecker.check(SourceFile.of(file, Files.readString(file)),
+        new DiskLoader(file.getParent()));
+    if (checked.scenario() == null) {
+      throw new IllegalStateException("scenario " + file + " did not check: " + checked.diagnostics());
+    }
+    return checked.scenario();
+  }
+
+  /** Solver options with the relative gap and a time cap in seconds. */
+  static SolveOptions capped(double gap, double cap) {
+    return SolveOptions.defaults().withRelativeGap(gap).withTimeLimit(Duration.ofMillis(Math.round(cap * 1000)));
+  }
+
+  /** The first line of a benchmark's output: the example, its size and the solve settings. */
+  static void header(Path file, Scenario base, double gap, double cap) {
+    System.out.printf(Locale.ROOT, "# %s: %d zones, horizon %d, SCIP, gap %g, cap %.0f s, %d cores%n",
+        file.getFileName(), base.zones().size(), base.plan().horizon(), gap, cap,
+        Runtime.getRuntime().availableProcessors());
   }
 
   /** CPU time of this whole process, the solver's native threads included. */

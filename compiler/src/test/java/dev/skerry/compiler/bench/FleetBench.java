@@ -2,9 +2,6 @@ package dev.skerry.compiler.bench;
 
 import dev.skerry.compiler.analysis.Analysis;
 import dev.skerry.compiler.analysis.Sizes;
-import dev.skerry.compiler.check.CheckResult;
-import dev.skerry.compiler.check.DiskLoader;
-import dev.skerry.compiler.check.ScenarioChecker;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
 import dev.skerry.compiler.model.Scenario;
@@ -17,10 +14,7 @@ import dev.skerry.compiler.plan.Planner;
 import dev.skerry.compiler.solve.SolveMonitor;
 import dev.skerry.compiler.solve.SolveOptions;
 import dev.skerry.compiler.solve.SolveResult;
-import dev.skerry.compiler.source.SourceFile;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -54,17 +48,9 @@ public final class FleetBench {
     int most = args.length > 2 ? Integer.parseInt(args[2]) : 4;
     int clustered = args.length > 3 ? Integer.parseInt(args[3]) : 3;
     Path file = Path.of("examples/harbour_survey.skerry").toAbsolutePath().normalize();
-    CheckResult checked = ScenarioChecker.check(SourceFile.of(file, Files.readString(file)),
-        new DiskLoader(file.getParent()));
-    if (checked.scenario() == null) {
-      throw new IllegalStateException("scenario " + file + " did not check: " + checked.diagnostics());
-    }
-    Scenario base = checked.scenario();
-    SolveOptions options = SolveOptions.defaults().withRelativeGap(gap)
-        .withTimeLimit(Duration.ofMillis(Math.round(cap * 1000)));
-    System.out.printf(Locale.ROOT, "# %s: %d zones, horizon %d, SCIP, gap %g, cap %.0f s, %d cores%n",
-        file.getFileName(), base.zones().size(), base.plan().horizon(), gap, cap,
-        Runtime.getRuntime().availableProcessors());
+    Scenario base = ClusterBench.load(file);
+    SolveOptions options = ClusterBench.capped(gap, cap);
+    ClusterBench.header(file, base, gap, cap);
     System.out.println("| vehicles | clusters | binaries | zone/cluster | separation | arrival | status | wall s"
         + " | wall ratio | CPU s | CPU ratio | cost | bound | verified | warm start |");
     System.out.println("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");

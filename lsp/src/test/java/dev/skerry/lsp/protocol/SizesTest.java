@@ -97,13 +97,7 @@ class SizesTest {
       Range all = new Range(Marked.position(text, 0), Marked.position(text, text.length()));
       List<InlayHint> hints = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(Harness.doc(uri), all))
           .get(5, TimeUnit.SECONDS);
-      var checked = dev.skerry.compiler.check.ScenarioChecker.check(
-          dev.skerry.compiler.source.SourceFile.of(dir.resolve("bay.skerry"), text),
-          new dev.skerry.compiler.check.DiskLoader(dir));
-      var sizes = dev.skerry.compiler.analysis.Analysis.sizes(checked.scenario());
-      String expected = String.format(java.util.Locale.ROOT, "binaries %,d · continuous %,d · rows %,d",
-          sizes.binaries(), sizes.continuous(), sizes.rows());
-      assertEquals(expected, hints.get(0).getLabel().getLeft());
+      assertEquals(label(compilerSizes("bay.skerry", text)), hints.get(0).getLabel().getLeft());
     }
   }
 
@@ -152,18 +146,26 @@ class SizesTest {
       Range all = new Range(Marked.position(text, 0), Marked.position(text, text.length()));
       List<InlayHint> hints = h.remote.getTextDocumentService().inlayHint(new InlayHintParams(Harness.doc(uri), all))
           .get(5, TimeUnit.SECONDS);
-      var checked = dev.skerry.compiler.check.ScenarioChecker.check(
-          dev.skerry.compiler.source.SourceFile.of(dir.resolve("fleet.skerry"), text),
-          new dev.skerry.compiler.check.DiskLoader(dir));
-      var sizes = dev.skerry.compiler.analysis.Analysis.sizes(checked.scenario());
+      var sizes = compilerSizes("fleet.skerry", text);
       assertTrue(sizes.separationBinaries() > 0, sizes.toString());
-      assertEquals(String.format(java.util.Locale.ROOT, "binaries %,d · continuous %,d · rows %,d", sizes.binaries(),
-          sizes.continuous(), sizes.rows()), hints.get(0).getLabel().getLeft());
+      assertEquals(label(sizes), hints.get(0).getLabel().getLeft());
       String plan = h.remote.getTextDocumentService().hover(new HoverParams(Harness.doc(uri),
           Marked.position(text, text.indexOf("horizon")))).get(5, TimeUnit.SECONDS).getContents().getRight().getValue();
       assertTrue(plan.contains("clusters: not available in 3-D"), plan);
       assertTrue(plan.contains("fleet of 2 vehicles, at least 4 m apart"), plan);
       assertEquals(List.of(), actions(h, uri, text));
     }
+  }
+
+  /** What `skerry check` predicts for the text, from the compiler itself. */
+  private dev.skerry.compiler.analysis.Sizes compilerSizes(String name, String text) {
+    var checked = dev.skerry.compiler.check.ScenarioChecker.check(
+        dev.skerry.compiler.source.SourceFile.of(dir.resolve(name), text), new dev.skerry.compiler.check.DiskLoader(dir));
+    return dev.skerry.compiler.analysis.Analysis.sizes(checked.scenario());
+  }
+
+  private static String label(dev.skerry.compiler.analysis.Sizes sizes) {
+    return String.format(java.util.Locale.ROOT, "binaries %,d · continuous %,d · rows %,d", sizes.binaries(),
+        sizes.continuous(), sizes.rows());
   }
 }
