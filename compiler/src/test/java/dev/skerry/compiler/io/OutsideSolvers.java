@@ -108,6 +108,17 @@ public final class OutsideSolvers {
    */
   public static Result glpsolObjective(Path model, ModelFormat format, boolean maximize)
       throws IOException, InterruptedException {
+    return glpsolObjective(model, format, maximize, TIMEOUT_SECONDS);
+  }
+
+  /** As {@link #glpsolObjective(Path, ModelFormat)}, the process ended after {@code timeoutSeconds}. */
+  public static Result glpsolObjective(Path model, ModelFormat format, long timeoutSeconds)
+      throws IOException, InterruptedException {
+    return glpsolObjective(model, format, false, timeoutSeconds);
+  }
+
+  private static Result glpsolObjective(Path model, ModelFormat format, boolean maximize, long timeoutSeconds)
+      throws IOException, InterruptedException {
     Path glpsol = require("glpsol", "glpk-utils");
     Path work = Files.createTempDirectory("skerry-glpsol");
     try {
@@ -129,7 +140,7 @@ public final class OutsideSolvers {
       if (maximize) {
         command.add("--max");
       }
-      String log = run(work, command, TIMEOUT_SECONDS);
+      String log = run(work, command, timeoutSeconds);
       if (!Files.exists(solution)) {
         return new Result("glpsol", Status.FAILED, Double.NaN, tail(log));
       }
