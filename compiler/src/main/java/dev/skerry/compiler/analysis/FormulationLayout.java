@@ -48,7 +48,7 @@ public record FormulationLayout(
   }
 
   /** Target {@code target} may take at most one of the listed vehicles (indices into {@link #vehicles}). */
-  public record Capacity(String target, List<Integer> vehicles) {
+  public record Capacity(String target, String tag, List<Integer> vehicles) {
     public Capacity {
       vehicles = List.copyOf(vehicles);
     }
@@ -201,7 +201,7 @@ public record FormulationLayout(
         }
       }
       if (takers.size() > 1) {
-        capacities.add(new Capacity(t.name(), takers));
+        capacities.add(new Capacity(t.name(), names.tag("target", t.name()), takers));
       }
     }
     boolean makespan = fleet && s.plan().latestArrival();

@@ -78,6 +78,7 @@ public record SeparationLayout(int a, int b, String nameA, String nameB, String 
         double bound = distance + (axis >= 4 ? verticalGrow : planGrow);
         double[] m = new double[pts.length];
         int[] keep = new int[pts.length];
+        double[] keptM = new double[pts.length];
         int kept = 0;
         boolean everywhere = true;
         boolean ok = true;
@@ -89,24 +90,17 @@ public record SeparationLayout(int a, int b, String nameA, String nameB, String 
           ok &= range[1] >= bound - Geometry.TOLERANCE * Math.max(1, Math.abs(bound));
           if (raw > 0) {
             keep[kept] = pts[i];
+            keptM[kept] = m[i];
             kept++;
           }
         }
-        Face full = new Face(axis, bound, pts.clone(), m);
-        all.add(full);
+        all.add(new Face(axis, bound, pts.clone(), m));
         if (!da.pruning()) {
           continue;
         }
         satisfied |= everywhere;
         if (ok) {
-          double[] mk = new double[kept];
-          int n = 0;
-          for (int i = 0; i < pts.length; i++) {
-            if (bound - difference(axis, da, db, pts[i])[0] > 0) {
-              mk[n++] = m[i];
-            }
-          }
-          possible.add(new Face(axis, bound, Arrays.copyOf(keep, kept), mk));
+          possible.add(new Face(axis, bound, Arrays.copyOf(keep, kept), Arrays.copyOf(keptM, kept)));
         }
       }
       if (!da.pruning()) {

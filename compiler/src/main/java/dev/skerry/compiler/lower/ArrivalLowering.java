@@ -79,9 +79,7 @@ final class ArrivalLowering {
           }
         }
       }
-      String tag = parts.get(cap.vehicles().get(0)).part.arrival().candidates().stream()
-          .filter(cd -> cd.name().equals(cap.target())).findFirst().orElseThrow().tag();
-      b.addLessOrEqual("takers_" + tag, e, 1, Origin.of(cap.target(), "one-vehicle"));
+      b.addLessOrEqual("takers_" + cap.tag(), e, 1, Origin.of(cap.target(), "one-vehicle"));
     }
     if (!layout.makespan()) {
       return null;

@@ -46,7 +46,7 @@ public final class Planner {
     return new Planner(Backends.standard());
   }
 
-  /** {@code run} with the time a failed warm-start search took taken off the limit, so the limit holds. */
+  /** {@code run} with the time the warm-start search took taken off the limit, so the limit holds. */
   private static SolveOptions lessTime(SolveOptions run, SolveOptions options, WarmStarts.Start start) {
     Duration left = options.timeLimit().map(l -> l.minus(start.wallTime())).orElse(null);
     return left == null ? run : run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
@@ -107,36 +107,21 @@ public final class Planner {
         notes.add("warm start: the previous plan shifted by one step");
       }
     }
-    if (warmStart && s.fleet() && backend.takesWarmStart() && backend.exact() && run.warmStart().isEmpty()) {
-      // The zone-by-zone heuristic keeps every separation binary in each restricted solve and cost
-      // more than it saved on a fleet (twin_skiffs: 12.2 s with it, 5.5 s without); planning the
+    if (warmStart && backend.takesWarmStart() && backend.exact() && run.warmStart().isEmpty()) {
+      // For a fleet the zone-by-zone heuristic keeps every separation binary in each restricted
+      // solve and cost more than it saved (twin_skiffs: 12.2 s with it, 5.5 s without); planning the
       // vehicles one after another costs about one single-vehicle solve per vehicle instead.
-      WarmStarts.Start start = FleetStarts.find(s, milp, backend, options, WARM_START_CAP);
-      if (start.found()) {
-        run = options.withWarmStart(start.values());
-        Duration left = options.timeLimit().map(l -> l.minus(start.wallTime())).orElse(null);
-        if (left != null) {
-          run = run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
-        }
+      WarmStarts.Start start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
+          : WarmStarts.find(milp, backend, options, WARM_START_CAP);
+      run = lessTime(start.found() ? options.withWarmStart(start.values()) : run, options, start);
+      if (!start.found()) {
+        notes.add("no warm start: " + start.reason());
+      } else if (s.fleet()) {
         notes.add(String.format(Locale.ROOT, "warm start: vehicles planned one after another, objective %.6g"
             + " in %.2f s", start.objective(), start.wallTime().toNanos() / 1e9));
       } else {
-        run = lessTime(run, options, start);
-        notes.add("no warm start: " + start.reason());
-      }
-    } else if (warmStart && backend.takesWarmStart() && backend.exact() && run.warmStart().isEmpty()) {
-      WarmStarts.Start start = WarmStarts.find(milp, backend, options, WARM_START_CAP);
-      if (start.found()) {
-        run = options.withWarmStart(start.values());
-        Duration left = options.timeLimit().map(l -> l.minus(start.wallTime())).orElse(null);
-        if (left != null) {
-          run = run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
-        }
         notes.add(String.format(Locale.ROOT, "warm start: objective %.6g found in %.2f s (%d zones needed)",
             start.objective(), start.wallTime().toNanos() / 1e9, start.zonesUsed()));
-      } else {
-        run = lessTime(run, options, start);
-        notes.add("no warm start: " + start.reason());
       }
     }
     SolveResult result = withNotes(backend.solve(milp, run, monitor), notes);
