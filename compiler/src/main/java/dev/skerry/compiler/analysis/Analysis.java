@@ -8,7 +8,35 @@ public final class Analysis {
   /** Clusters suggested for comparison when a plan has none. */
   public static final int SUGGESTED_CLUSTERS = 2;
 
+  /** The most binaries, before pruning, of a plan Skerry lays out (see {@link #binaryBound}). */
+  public static final long MAX_BINARIES = 2_000_000;
+
   private Analysis() {}
+
+  /**
+   * An upper bound of the plan's binaries without building its layout: the unpruned count of every
+   * cause (zone faces or cluster boxes per vehicle and step, arrival per vehicle, candidate target
+   * and step, waypoint visits per vehicle and step, separation faces per pair and step). Cheap, so
+   * the checker can refuse a plan whose layout would not fit in memory.
+   */
+  public static long binaryBound(Scenario s) {
+    long n = s.plan().horizon();
+    long v = s.vehicles().size();
+    long faces = 0;
+    for (var z : s.zones()) {
+      faces += z.faceCount();
+    }
+    long zones = s.plan().clustered()
+        ? v * 4L * s.plan().clusters() * n + (long) s.zones().size() * s.plan().clusters()
+        : v * faces * n;
+    long arrival = 0;
+    for (var vehicle : s.vehicles()) {
+      arrival += s.candidateTargets(vehicle).size() * n;
+    }
+    long waypoints = (long) s.waypoints().size() * v * n;
+    long separation = v * (v - 1) / 2 * (s.threeD() ? 6 : 4) * n;
+    return zones + arrival + waypoints + separation;
+  }
 
   /** Sizes of the plan as written. */
   public static Sizes sizes(Scenario s) {

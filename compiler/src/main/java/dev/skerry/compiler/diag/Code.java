@@ -32,6 +32,7 @@ public enum Code {
       "An included file may hold only zones, constants and units."),
   // Values and shapes
   VALUE_OUT_OF_RANGE("value-out-of-range", Severity.ERROR, "A value outside its allowed range."),
+  MODEL_TOO_LARGE("model-too-large", Severity.ERROR, "The plan could have more binaries than Skerry builds."),
   WRONG_DIMENSION("wrong-dimension", Severity.ERROR, "A point with the wrong number of coordinates."),
   DIMENSION_MISMATCH("dimension-mismatch", Severity.ERROR,
       "An altitude or climb item in a plan-view scenario, or an altitude given twice."),
