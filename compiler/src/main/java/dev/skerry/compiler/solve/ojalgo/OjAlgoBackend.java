@@ -1,6 +1,7 @@
 package dev.skerry.compiler.solve.ojalgo;
 
 import dev.skerry.compiler.milp.Milp;
+import dev.skerry.compiler.milp.Reduction;
 import dev.skerry.compiler.solve.CancelToken;
 import dev.skerry.compiler.solve.Capability;
 import dev.skerry.compiler.solve.ObjectiveBound;
@@ -31,6 +32,10 @@ import org.ojalgo.type.context.NumberContext;
  * <p>What it does about ojAlgo's traps, each measured on our formulation:
  *
  * <ul>
+ *   <li>ojAlgo gets the model with its fixed columns and one-column rows taken out ({@link
+ *       Reduction}, exact); the values it returns are expanded back. The zone-by-zone warm start
+ *       fixes most face binaries, and ojAlgo's simplex pays for every column and row: the harbour
+ *       example's zone-free LP took 0.65 s reduced against 1.41 s as lowered (one run each).
  *   <li>Its presolvers are cleared (once, JVM-wide: {@code clearPresolvers} is static). On the
  *       72-binary test hop the median of five runs was 5.8 s cleared against 7.7 s by default
  *       (single runs vary by half); and its exact presolve has called a feasible big-M model
@@ -100,13 +105,33 @@ public final class OjAlgoBackend implements SolverBackend {
     long start = System.nanoTime();
     SolveResult.Builder result = SolveResult.builder(ID, SolveStatus.ERROR);
     try (ProgressTicker ticker = new ProgressTicker(ID, monitor, tick)) {
-      ExpressionsBasedModel model = OjAlgoModels.of(milp);
-      configure(model, options, milp, ticker);
       Optional<double[]> warm = WarmStart.prepare(milp, options, result);
-      warm.ifPresent(x -> OjAlgoModels.setStart(model, x));
-      Outcome outcome = run(milp, model, options, ticker);
-      describe(milp, outcome, result);
-      crossCheckWithRelaxation(milp, outcome, result);
+      Reduction reduction = Reduction.of(milp);
+      if (reduction.infeasibleRow() != null) {
+        result
+            .status(SolveStatus.INFEASIBLE)
+            .stopReason(StopReason.FINISHED)
+            .message(
+                "row "
+                    + reduction.infeasibleRow()
+                    + " cannot hold once the fixed columns and one-column rows are taken out");
+      } else if (reduction.reduced().columnCount() == 0) {
+        result
+            .status(SolveStatus.OPTIMAL)
+            .stopReason(StopReason.FINISHED)
+            .values(reduction.expand(new double[0]));
+      } else {
+        Milp reduced = reduction.reduced();
+        ExpressionsBasedModel model = OjAlgoModels.of(reduced);
+        configure(model, options, reduced, ticker);
+        warm.ifPresent(x -> OjAlgoModels.setStart(model, reduction.restrict(x)));
+        Outcome outcome = run(reduced, model, options, ticker);
+        describe(reduced, outcome, result);
+        crossCheckWithRelaxation(reduced, outcome, result);
+        if (result.status().hasSolution()) {
+          result.values(reduction.expand(result.values()));
+        }
+      }
       warm.ifPresent(x -> fallBackToStart(milp, x, result));
       if (ticker.monitorFailure() != null) {
         result.warning(ticker.monitorFailure());
