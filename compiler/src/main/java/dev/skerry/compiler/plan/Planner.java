@@ -52,6 +52,18 @@ public final class Planner {
     return left == null ? run : run.withTimeLimit(left.compareTo(MIN_TIME_LEFT) > 0 ? left : MIN_TIME_LEFT);
   }
 
+  /**
+   * The time the arrival scan may take: three quarters of the time limit, as the slow backend's own
+   * search of the whole model seldom finds a plan that the scan did not (BENCHMARKS.md), or {@link
+   * #SCAN_CAP} without a limit.
+   */
+  static Duration scanBudget(SolveOptions options) {
+    return options.timeLimit().map(l -> l.multipliedBy(3).dividedBy(4)).orElse(SCAN_CAP);
+  }
+
+  /** The arrival scan's time when the solve has no time limit. */
+  public static final Duration SCAN_CAP = Duration.ofSeconds(60);
+
   /** The least time the solve proper is left after a warm start that used up the limit. */
   private static final Duration MIN_TIME_LEFT = Duration.ofMillis(100);
 
@@ -111,11 +123,16 @@ public final class Planner {
       // For a fleet the zone-by-zone heuristic keeps every separation binary in each restricted
       // solve and cost more than it saved (twin_skiffs: 12.2 s with it, 5.5 s without); planning the
       // vehicles one after another costs about one single-vehicle solve per vehicle instead.
+      boolean scan = !s.fleet() && backend.branchesSlowly() && ArrivalScan.applies(milp);
       WarmStarts.Start start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
+          : scan ? ArrivalScan.find(milp, backend, options, scanBudget(options))
           : WarmStarts.find(milp, backend, options, WARM_START_CAP);
       run = lessTime(start.found() ? options.withWarmStart(start.values()) : run, options, start);
       if (!start.found()) {
         notes.add("no warm start: " + start.reason());
+      } else if (scan) {
+        notes.add(String.format(Locale.ROOT, "warm start: arrival scan, objective %.6g found in %.2f s (%d small"
+            + " solves)", start.objective(), start.wallTime().toNanos() / 1e9, start.rounds()));
       } else if (s.fleet()) {
         notes.add(String.format(Locale.ROOT, "warm start: vehicles planned one after another, objective %.6g"
             + " in %.2f s", start.objective(), start.wallTime().toNanos() / 1e9));

@@ -131,7 +131,7 @@ public final class WarmStarts {
   }
 
   /** Sets every face binary: 1 for the face with the largest margin where one holds, else 0. */
-  private static void setFaces(Milp model, double[] x) {
+  static void setFaces(Milp model, double[] x) {
     Map<Integer, Double> margin = margins(model, x);
     for (Row r : model.rows()) {
       if (!r.origin().role().equals("cover")) {
@@ -150,7 +150,7 @@ public final class WarmStarts {
   }
 
   /** The face column of a cover row with the largest non-negative margin, or -1. */
-  private static int bestFace(Milp model, Row cover, Map<Integer, Double> margin) {
+  static int bestFace(Milp model, Row cover, Map<Integer, Double> margin) {
     int best = -1;
     double top = -MARGIN_SLACK;
     for (int c : cover.cols()) {
@@ -167,7 +167,7 @@ public final class WarmStarts {
   private static final double MARGIN_SLACK = 1e-9;
 
   /** The activity of a cover row's columns that are not faces (the arrival relaxation). */
-  private static double rest(Milp model, Row r, double[] x) {
+  static double rest(Milp model, Row r, double[] x) {
     double sum = 0;
     for (int i = 0; i < r.cols().length; i++) {
       if (!isFace(model.variables().get(r.cols()[i]))) {
@@ -178,7 +178,7 @@ public final class WarmStarts {
   }
 
   /** Each face column's smallest margin over its avoidance rows. */
-  private static Map<Integer, Double> margins(Milp model, double[] x) {
+  static Map<Integer, Double> margins(Milp model, double[] x) {
     Map<Integer, Double> margin = new HashMap<>();
     for (Row r : model.rows()) {
       if (r.origin().role().equals("avoid")) {
@@ -209,7 +209,7 @@ public final class WarmStarts {
     return e - r.lower() - bigM;
   }
 
-  private static boolean isFace(Variable v) {
+  static boolean isFace(Variable v) {
     return v.origin().role().equals("avoid-binary");
   }
 

@@ -22,6 +22,15 @@ public interface SolverBackend {
     return true;
   }
 
+  /**
+   * True for a backend whose branch and bound is too slow for the zone-by-zone warm start's MILPs
+   * on models of a realistic size (ojAlgo): the planner looks for its start with the arrival scan,
+   * whose MILPs have the arrival fixed and a few dozen face binaries.
+   */
+  default boolean branchesSlowly() {
+    return false;
+  }
+
   /** False for a backend that solves a transformed copy, so its values are only nearly feasible. */
   default boolean exact() {
     return true;

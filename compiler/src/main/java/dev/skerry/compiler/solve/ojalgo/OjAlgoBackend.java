@@ -96,6 +96,11 @@ public final class OjAlgoBackend implements SolverBackend {
   }
 
   @Override
+  public boolean branchesSlowly() {
+    return true;
+  }
+
+  @Override
   public Capability capableOf(Milp model) {
     return Capability.yes();
   }

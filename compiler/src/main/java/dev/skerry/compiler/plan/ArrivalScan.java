@@ -1,0 +1,373 @@
+package dev.skerry.compiler.plan;
+
+import dev.skerry.compiler.milp.Milp;
+import dev.skerry.compiler.milp.Row;
+import dev.skerry.compiler.milp.VarType;
+import dev.skerry.compiler.milp.Variable;
+import dev.skerry.compiler.solve.SolveOptions;
+import dev.skerry.compiler.solve.SolveResult;
+import dev.skerry.compiler.solve.SolverBackend;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.TreeSet;
+
+/**
+ * A feasible point of a one-vehicle model for a backend whose branch and bound is slow (ojAlgo),
+ * found by small MILPs: the arrival step is fixed and only the zone slots the path runs into keep
+ * their face binaries free.
+ *
+ * <p>Why: the zone-by-zone heuristic ({@link WarmStarts}) solves models with every arrival binary
+ * and every face binary of the zones put back. ojAlgo cannot: on the harbour example the first such
+ * model (48 arrival and waypoint binaries, no zones) took it 15–25 s, and with three zones put back
+ * and the arrival fixed it found nothing in 30 s. With the arrival fixed and no zones it answers in
+ * 0.3–3 s; with a few dozen face binaries about as fast (BENCHMARKS.md).
+ *
+ * <ol>
+ *   <li>Solve the LP relaxation of the zone-free model; its mean arrival step, rounded down, is the
+ *       first step tried (the relaxation flies through every zone, so an earlier step seldom gives
+ *       a point).
+ *   <li>For an arrival step k: fix the arrival binaries at k. Fix each waypoint's visit binaries at
+ *       the step the zone-free LP visits on average, or the nearest step around it for which that
+ *       LP still has a point ({@link #VISIT_TRIES} tried; none: the visit stays free). Solve the
+ *       zone-free model. Then, while the point runs into zones: put those zones back; every slot of
+ *       theirs within a window of a broken slot (now or in an earlier round) keeps its face
+ *       binaries free, every other slot gets the face that holds at the point with the largest
+ *       margin (a side the path already keeps), and the rows those fixings leave idle are dropped.
+ *       Solve again. A solve with no point widens the window ({@link #WINDOWS}). When the point
+ *       clears every zone it is a start.
+ *   <li>The steps are tried galloping (k, k + 1, k + 3, k + 7, ...) until one gives a point, then
+ *       by bisection between the last that gave none and the earliest that gave one; the cheapest
+ *       point is kept. A step that gives no point is not proven infeasible (a solve may stop at its
+ *       limit), so the start is not claimed optimal.
+ * </ol>
+ *
+ * Only for a model with one set of arrival binaries (one vehicle, one target); anything else gets an
+ * empty result, as does any failure, never an exception.
+ */
+public final class ArrivalScan {
+  /**
+   * Slots on each side of a broken slot that keep their face binaries free: the first, then wider
+   * when a solve gives no point (the path may have to change sides further away, as round the end
+   * of a long shelf), the last being the whole zone.
+   */
+  static final int[] WINDOWS = {2, 6, Integer.MAX_VALUE / 2};
+
+  /**
+   * One small solve may take at most this share of the budget: a solve stopped at its limit with a
+   * point still gives the next round its sides, and a step that will not work does not eat the
+   * whole budget.
+   */
+  static final int ROUND_SHARE = 4;
+
+  /** Solves per arrival step at most (each puts back at least one zone or frees a slot). */
+  public static final int MAX_ROUNDS = 12;
+
+  private ArrivalScan() {}
+
+  /** Whether the scan can run on {@code model}: it has exactly one set of arrival binaries. */
+  public static boolean applies(Milp model) {
+    return !arrivalColumns(model).isEmpty();
+  }
+
+  /** A start for {@code model} found with {@code backend} within {@code budget} in all. */
+  public static WarmStarts.Start find(Milp model, SolverBackend backend, SolveOptions options, Duration budget) {
+    long t0 = System.nanoTime();
+    List<Variable> arrivals = arrivalColumns(model);
+    if (arrivals.isEmpty()) {
+      return none(t0, 0, 0, "the model has no single set of arrival binaries");
+    }
+    int solves = 0;
+    try {
+      SolveResult lp = backend.solve(relaxed(WarmStarts.restricted(model, Set.of())), sub(options, budget, t0));
+      solves++;
+      if (!lp.status().hasSolution()) {
+        return none(t0, solves, 0, "zone-free LP relaxation: " + lp.summary());
+      }
+      int first = meanStep(arrivals, lp.values());
+      // galloping from the relaxation's step (1, 2, 4, ... steps on) until one gives a point, then a
+      // bisection between the last that gave none and it: an early step that gives no point is
+      // quick to refute, a late one is slow to find (its path meets more slots of the zones)
+      int lo = 0;
+      while (lo < arrivals.size() - 1 && arrivals.get(lo).origin().step() < first) {
+        lo++;
+      }
+      int hi = arrivals.size() - 1;
+      WarmStarts.Start best = null;
+      int probe = lo;
+      int stride = 1;
+      while (lo <= hi && !left(budget, t0).isZero() && !options.cancel().isCancelled()) {
+        Attempt a = atStep(model, arrivals.get(probe), arrivals, backend, options, budget, t0);
+        solves += a.solves();
+        if (a.start() != null) {
+          if (best == null || a.start().objective() < best.objective()) {
+            best = a.start();
+          }
+          hi = probe - 1;
+          probe = (lo + hi) / 2;
+        } else {
+          lo = probe + 1;
+          if (best == null) {
+            probe = Math.min(hi, probe + stride);
+            stride *= 2;
+          } else {
+            probe = (lo + hi) / 2;
+          }
+        }
+      }
+      if (best == null) {
+        return none(t0, solves, 0, "no arrival step from " + first + " gave a point within "
+            + budget.toMillis() + " ms");
+      }
+      return new WarmStarts.Start(best.values(), best.objective(), WarmStarts.since(t0), solves, best.zonesUsed(), "");
+    } catch (RuntimeException e) {
+      return none(t0, solves, 0, "arrival scan failed: " + e);
+    }
+  }
+
+  private record Attempt(WarmStarts.Start start, int solves) {}
+
+  /** The lazy-zone rounds with the arrival fixed at {@code arrival}'s step. */
+  private static Attempt atStep(Milp model, Variable arrival, List<Variable> arrivals, SolverBackend backend,
+      SolveOptions options, Duration budget, long t0) {
+    Map<Integer, Double> fixed = new HashMap<>();
+    for (Variable v : arrivals) {
+      fixed.put(v.index(), v == arrival ? 1.0 : 0.0);
+    }
+    int solves = 0;
+    List<Integer> visits = new ArrayList<>();
+    SolveResult lp = backend.solve(relaxed(withBounds(WarmStarts.restricted(model, Set.of()), fixed)),
+        sub(options, budget, t0));
+    solves++;
+    if (!lp.status().hasSolution()) {
+      return new Attempt(null, solves);
+    }
+    solves += fixVisits(model, lp.values(), fixed, visits, backend, options, budget, t0);
+    Set<String> active = new TreeSet<>();
+    Map<String, Set<Integer>> everBroken = new TreeMap<>();
+    double[] last = null;
+    int window = WINDOWS[0];
+    for (int round = 1; round <= MAX_ROUNDS; round++) {
+      if (left(budget, t0).isZero()) {
+        return new Attempt(null, solves);
+      }
+      SolveResult r = backend.solve(withBounds(WarmStarts.restricted(model, active), fixed),
+          sub(options, budget, t0, budget.dividedBy(ROUND_SHARE)));
+      solves++;
+      if (!r.status().hasSolution()) {
+        if (last == null && !visits.isEmpty()) {
+          // the visit steps the LP suggested do not fit: let the solver choose them
+          visits.forEach(fixed::remove);
+          visits.clear();
+          continue;
+        }
+        if (last == null || window >= WINDOWS[WINDOWS.length - 1]) {
+          return new Attempt(null, solves);
+        }
+        // the path may need to change sides further from where it ran into the zone: free more
+        window = WINDOWS[java.util.Arrays.binarySearch(WINDOWS, window) + 1];
+        fixSides(model, active, everBroken, last, fixed, window);
+        continue;
+      }
+      double[] x = r.values();
+      last = x.clone();
+      Map<String, Set<Integer>> broken = brokenSlots(model, x);
+      if (broken.isEmpty()) {
+        WarmStarts.setFaces(model, x);
+        if (!(model.maxViolation(x) <= WarmStarts.TOLERANCE)) {
+          return new Attempt(null, solves);
+        }
+        return new Attempt(new WarmStarts.Start(x, model.objective().value(x), WarmStarts.since(t0), solves,
+            active.size(), ""), solves);
+      }
+      active.addAll(broken.keySet());
+      broken.forEach((zone, slots) -> everBroken.computeIfAbsent(zone, k -> new TreeSet<>()).addAll(slots));
+      fixSides(model, active, everBroken, x, fixed, window);
+    }
+    return new Attempt(null, solves);
+  }
+
+  /**
+   * Fixes each waypoint's visit binaries (added to {@code visits}) at the step nearest the one the
+   * LP {@code x} visits on average for which the zone-free LP still has a point, trying up to
+   * {@link #VISIT_TRIES} steps around it: with the arrival fixed too, the zone-free model is then
+   * a plain LP. A waypoint with no such step stays free.
+   */
+  private static int fixVisits(Milp model, double[] x, Map<Integer, Double> fixed, List<Integer> visits,
+      SolverBackend backend, SolveOptions options, Duration budget, long t0) {
+    Map<String, List<Variable>> groups = new TreeMap<>();
+    for (Variable v : model.variables()) {
+      if (v.origin().role().equals("visit") && !fixed.containsKey(v.index())) {
+        groups.computeIfAbsent(v.origin().owner() + "/" + v.origin().entity(), k -> new ArrayList<>()).add(v);
+      }
+    }
+    int solves = 0;
+    Milp zoneFree = WarmStarts.restricted(model, Set.of());
+    for (List<Variable> group : groups.values()) {
+      double mass = 0;
+      double mean = 0;
+      for (Variable v : group) {
+        mass += x[v.index()];
+        mean += x[v.index()] * v.origin().step();
+      }
+      long centre = Math.round(mean / Math.max(mass, 1e-9));
+      for (int t = 0; t < VISIT_TRIES; t++) {
+        long step = centre + (t % 2 == 1 ? (t + 1) / 2 : -(t / 2));
+        Variable chosen = group.stream().filter(v -> v.origin().step() == step).findFirst().orElse(null);
+        if (chosen == null || left(budget, t0).isZero()) {
+          continue;
+        }
+        for (Variable v : group) {
+          fixed.put(v.index(), v == chosen ? 1.0 : 0.0);
+        }
+        solves++;
+        if (backend.solve(relaxed(withBounds(zoneFree, fixed)), sub(options, budget, t0)).status().hasSolution()) {
+          group.forEach(v -> visits.add(v.index()));
+          break;
+        }
+        group.forEach(v -> fixed.remove(v.index()));
+      }
+    }
+    return solves;
+  }
+
+  /** Visit steps tried around the LP's for each waypoint. */
+  static final int VISIT_TRIES = 9;
+
+  /** The arrival binaries of the model's one target, in step order; empty unless there is exactly one set. */
+  static List<Variable> arrivalColumns(Milp model) {
+    Map<String, List<Variable>> byTarget = new TreeMap<>();
+    for (Variable v : model.variables()) {
+      if (v.origin().role().equals("arrive")) {
+        byTarget.computeIfAbsent(v.origin().owner() + "/" + v.origin().entity(), k -> new ArrayList<>()).add(v);
+      }
+    }
+    if (byTarget.size() != 1) {
+      return List.of();
+    }
+    List<Variable> cols = new ArrayList<>(byTarget.values().iterator().next());
+    cols.sort((a, b) -> Integer.compare(a.origin().step(), b.origin().step()));
+    return cols;
+  }
+
+  /** The LP relaxation's mean arrival step, rounded down. */
+  private static int meanStep(List<Variable> arrivals, double[] x) {
+    double mass = 0;
+    double mean = 0;
+    for (Variable v : arrivals) {
+      mass += x[v.index()];
+      mean += x[v.index()] * v.origin().step();
+    }
+    return mass <= 0 ? arrivals.get(0).origin().step() : (int) Math.floor(mean / mass + 1e-9);
+  }
+
+  /**
+   * The slots each zone's cover row shows broken at {@code x}: no face holds and the arrival
+   * relaxation does not make up for it.
+   */
+  private static Map<String, Set<Integer>> brokenSlots(Milp model, double[] x) {
+    Map<Integer, Double> margin = WarmStarts.margins(model, x);
+    Map<String, Set<Integer>> broken = new TreeMap<>();
+    for (Row r : model.rows()) {
+      if (r.origin().role().equals("cover") && WarmStarts.bestFace(model, r, margin) < 0
+          && WarmStarts.rest(model, r, x) < r.lower() - WarmStarts.TOLERANCE) {
+        broken.computeIfAbsent(r.origin().entity(), k -> new TreeSet<>()).add(r.origin().step());
+      }
+    }
+    return broken;
+  }
+
+  /**
+   * For every slot of the active zones: face binaries free within {@link #WINDOWS} of a slot broken
+   * in this or an earlier round; elsewhere the face that holds at {@code x} with the largest margin
+   * fixed at 1 and the slot's other faces at 0, or every face at 0 where the arrival relaxation
+   * covers the slot.
+   */
+  private static void fixSides(Milp model, Set<String> active, Map<String, Set<Integer>> everBroken, double[] x,
+      Map<Integer, Double> fixed, int window) {
+    Map<Integer, Double> margin = WarmStarts.margins(model, x);
+    for (Row cover : model.rows()) {
+      if (!cover.origin().role().equals("cover") || !active.contains(cover.origin().entity())) {
+        continue;
+      }
+      int slot = cover.origin().step();
+      boolean near = everBroken.getOrDefault(cover.origin().entity(), Set.of()).stream()
+          .anyMatch(s -> Math.abs(s - slot) <= window);
+      int face = WarmStarts.bestFace(model, cover, margin);
+      boolean relaxed = WarmStarts.rest(model, cover, x) >= cover.lower() - WarmStarts.TOLERANCE;
+      for (int c : cover.cols()) {
+        if (!WarmStarts.isFace(model.variables().get(c))) {
+          continue;
+        }
+        if (near || (face < 0 && !relaxed)) {
+          fixed.remove(c);
+        } else {
+          fixed.put(c, c == face ? 1.0 : 0.0);
+        }
+      }
+    }
+  }
+
+  /**
+   * The model with some columns fixed (kept integer), without the rows those fixings leave with
+   * nothing to say: an avoidance row whose face is fixed at 0 (its big-M is valid for every point
+   * the dynamics can reach, so it cannot bind) and a cover row with a face fixed at 1. Every point
+   * found is checked against the whole model before it is used, so dropping a row can never let a
+   * wrong start through; it only makes each small solve cheaper.
+   */
+  private static Milp withBounds(Milp model, Map<Integer, Double> fixed) {
+    List<Variable> vars = new ArrayList<>(model.columnCount());
+    for (Variable v : model.variables()) {
+      Double value = fixed.get(v.index());
+      vars.add(value == null ? v : new Variable(v.index(), v.name(), v.type(), value, value, v.origin()));
+    }
+    List<Row> rows = new ArrayList<>(model.rowCount());
+    for (Row r : model.rows()) {
+      String role = r.origin().role();
+      double drop = role.equals("avoid") ? 0.0 : role.equals("cover") ? 1.0 : -1;
+      boolean idle = false;
+      for (int c : r.cols()) {
+        Double value = fixed.get(c);
+        idle |= drop >= 0 && value != null && value == drop && WarmStarts.isFace(model.variables().get(c));
+      }
+      if (!idle) {
+        rows.add(new Row(rows.size(), r.name(), r.cols(), r.coefs(), r.lower(), r.upper(), r.origin()));
+      }
+    }
+    return new Milp(model.name(), vars, rows, model.objective());
+  }
+
+  /** The model with every integer column continuous. */
+  private static Milp relaxed(Milp model) {
+    List<Variable> vars = new ArrayList<>(model.columnCount());
+    for (Variable v : model.variables()) {
+      vars.add(v.isInteger() ? new Variable(v.index(), v.name(), VarType.CONTINUOUS, v.lower(), v.upper(), v.origin())
+          : v);
+    }
+    return new Milp(model.name() + "_lp", vars, model.rows(), model.objective());
+  }
+
+  private static SolveOptions sub(SolveOptions options, Duration budget, long t0) {
+    return sub(options, budget, t0, budget);
+  }
+
+  /** Options for one small solve: at most {@code most}, and no more than the budget has left. */
+  private static SolveOptions sub(SolveOptions options, Duration budget, long t0, Duration most) {
+    Duration left = left(budget, t0);
+    left = left.compareTo(most) > 0 ? most : left;
+    return options.withWarmStart(null).withTimeLimit(left.isZero() ? Duration.ofMillis(1) : left);
+  }
+
+  private static Duration left(Duration budget, long t0) {
+    Duration left = budget.minus(WarmStarts.since(t0));
+    return left.isNegative() ? Duration.ZERO : left;
+  }
+
+  private static WarmStarts.Start none(long t0, int solves, int zones, String reason) {
+    return new WarmStarts.Start(null, Double.NaN, WarmStarts.since(t0), solves, zones, reason);
+  }
+}
