@@ -64,6 +64,12 @@ public final class ArrivalScan {
    */
   static final int ROUND_SHARE = 4;
 
+  /**
+   * The relative gap of each small solve, at least: a start needs a point, not a proof, and a
+   * branch and bound that may stop at 2 % ends sooner and leaves more of the budget for the rounds.
+   */
+  static final double SUB_GAP = 0.02;
+
   /** Solves per arrival step at most (each puts back at least one zone or frees a slot). */
   public static final int MAX_ROUNDS = 12;
 
@@ -359,7 +365,8 @@ public final class ArrivalScan {
   private static SolveOptions sub(SolveOptions options, Duration budget, long t0, Duration most) {
     Duration left = left(budget, t0);
     left = left.compareTo(most) > 0 ? most : left;
-    return options.withWarmStart(null).withTimeLimit(left.isZero() ? Duration.ofMillis(1) : left);
+    return options.withWarmStart(null).withRelativeGap(Math.max(options.relativeGap(), SUB_GAP))
+        .withTimeLimit(left.isZero() ? Duration.ofMillis(1) : left);
   }
 
   private static Duration left(Duration budget, long t0) {
