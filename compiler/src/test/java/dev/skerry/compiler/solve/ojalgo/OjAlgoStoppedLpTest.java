@@ -1,10 +1,20 @@
 package dev.skerry.compiler.solve.ojalgo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.skerry.compiler.lower.Lowering;
 import dev.skerry.compiler.milp.Milp;
+import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.plan.ExampleScenarios;
+import dev.skerry.compiler.solve.SolveOptions;
+import dev.skerry.compiler.solve.SolveResult;
+import dev.skerry.compiler.solve.SolveStatus;
+import dev.skerry.compiler.solve.StopReason;
+import dev.skerry.compiler.solve.ortools.Engine;
+import dev.skerry.compiler.solve.ortools.OrToolsBackend;
+import java.util.ArrayList;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.ojalgo.optimisation.ExpressionsBasedModel;
 import org.ojalgo.optimisation.Optimisation;
@@ -28,5 +38,61 @@ class OjAlgoStoppedLpTest {
     ExpressionsBasedModel mip = OjAlgoModels.of(m);
     mip.options.iterations_abort = 300;
     assertEquals(Optimisation.State.INFEASIBLE, mip.minimise().getState(), "ojAlgo's answer for a feasible model");
+  }
+
+  /**
+   * The same pruning with an incumbent: given a plan that arrives at the last step (32.53, found by
+   * SCIP with the arrival fixed there) and the same iteration limit, ojAlgo answers OPTIMAL at that
+   * plan, where 26.74 exists (it finds that without the limit). This is why an OPTIMAL after a stop
+   * is reported as FEASIBLE.
+   */
+  @Test
+  void ojAlgoCallsItsStartOptimalWhenItsRootLpIsStopped() {
+    new OjAlgoBackend();
+    Milp m = Lowering.lower(ExampleScenarios.small("harbour_survey"));
+    double[] late = lateArrival(m);
+    ExpressionsBasedModel mip = OjAlgoModels.of(m);
+    OjAlgoModels.setStart(mip, late);
+    mip.options.iterations_abort = 300;
+    Optimisation.Result stopped = mip.minimise();
+    assertEquals(Optimisation.State.OPTIMAL, stopped.getState(), "ojAlgo's answer when stopped");
+    assertEquals(m.objective().value(late), stopped.getValue() + m.objective().constant(), 1e-6);
+    ExpressionsBasedModel free = OjAlgoModels.of(m);
+    OjAlgoModels.setStart(free, late);
+    Optimisation.Result finished = free.minimise();
+    assertEquals(Optimisation.State.OPTIMAL, finished.getState());
+    assertTrue(finished.getValue() + m.objective().constant() < m.objective().value(late) - 1,
+        "without the limit ojAlgo finds the better plan");
+  }
+
+  /** Our reading of it: OPTIMAL from a search a limit stopped is a feasible plan, not a proof. */
+  @Test
+  void anOptimalAfterAStopIsReportedAsFeasible() {
+    Milp m = Lowering.lower(ExampleScenarios.small("harbour_survey"));
+    double[] late = lateArrival(m);
+    Optimisation.Result optimal = Optimisation.Result.of(Optimisation.State.OPTIMAL, late);
+    SolveResult.Builder stopped = SolveResult.builder(OjAlgoBackend.ID, SolveStatus.ERROR);
+    OjAlgoBackend.describe(m, new OjAlgoBackend.Outcome(optimal, null, StopReason.TIME_LIMIT, false), stopped);
+    assertEquals(SolveStatus.FEASIBLE, stopped.status());
+    assertEquals(StopReason.TIME_LIMIT, stopped.build().stopReason());
+    SolveResult.Builder finished = SolveResult.builder(OjAlgoBackend.ID, SolveStatus.ERROR);
+    OjAlgoBackend.describe(m, new OjAlgoBackend.Outcome(optimal, null, StopReason.FINISHED, false), finished);
+    assertEquals(SolveStatus.OPTIMAL, finished.status());
+  }
+
+  /** A plan of {@code m} that arrives at the last step: SCIP's optimum with the arrival fixed there. */
+  private static double[] lateArrival(Milp m) {
+    int last = m.variables().stream().filter(v -> v.origin().role().equals("arrive"))
+        .mapToInt(v -> v.origin().step()).max().orElseThrow();
+    List<Variable> vars = new ArrayList<>();
+    for (Variable v : m.variables()) {
+      double at = v.origin().step() == last ? 1 : 0;
+      vars.add(v.origin().role().equals("arrive") ? new Variable(v.index(), v.name(), v.type(), at, at, v.origin()) : v);
+    }
+    SolveResult r = new OrToolsBackend(Engine.SCIP).solve(new Milp("late", vars, m.rows(), m.objective()),
+        SolveOptions.defaults());
+    assertEquals(SolveStatus.OPTIMAL, r.status(), r::summary);
+    assertTrue(m.maxViolation(r.values()) <= 1e-6);
+    return r.values();
   }
 }
