@@ -9,6 +9,7 @@ import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.solve.SolverBackend;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -110,7 +111,9 @@ public final class ArrivalScan {
         Attempt a = atStep(model, arrivals.get(probe), arrivals, backend, options, budget, t0);
         solves += a.solves();
         if (a.start() != null) {
-          if (best == null || a.start().objective() < best.objective()) {
+          boolean better = best == null || (model.objective().minimize()
+              ? a.start().objective() < best.objective() : a.start().objective() > best.objective());
+          if (better) {
             best = a.start();
           }
           hi = probe - 1;
@@ -175,7 +178,7 @@ public final class ArrivalScan {
           return new Attempt(null, solves);
         }
         // the path may need to change sides further from where it ran into the zone: free more
-        window = WINDOWS[java.util.Arrays.binarySearch(WINDOWS, window) + 1];
+        window = WINDOWS[Arrays.binarySearch(WINDOWS, window) + 1];
         fixSides(model, active, everBroken, last, fixed, window);
         continue;
       }
