@@ -134,39 +134,35 @@ public final class Reduction {
       if (dropped[r.index()] && infeasible == null) {
         continue;
       }
-      double constant = 0;
-      int[] cols = new int[r.cols().length];
-      double[] coefs = new double[r.cols().length];
-      int k = 0;
-      for (int i = 0; i < r.cols().length; i++) {
-        int c = r.cols()[i];
-        if (newIndex[c] < 0) {
-          constant += r.coefs()[i] * fixed[c];
-        } else {
-          cols[k] = newIndex[c];
-          coefs[k++] = r.coefs()[i];
-        }
-      }
-      rows.add(new Row(rows.size(), r.name(), Arrays.copyOf(cols, k), Arrays.copyOf(coefs, k), r.lower() - constant,
-          r.upper() - constant, r.origin()));
+      Terms t = Terms.of(r.cols(), r.coefs(), newIndex, fixed);
+      rows.add(new Row(rows.size(), r.name(), t.cols(), t.coefs(), r.lower() - t.constant(), r.upper() - t.constant(),
+          r.origin()));
     }
     Objective o = model.objective();
-    double constant = o.constant();
-    int[] cols = new int[o.cols().length];
-    double[] coefs = new double[o.cols().length];
-    int k = 0;
-    for (int i = 0; i < o.cols().length; i++) {
-      int c = o.cols()[i];
-      if (newIndex[c] < 0) {
-        constant += o.coefs()[i] * fixed[c];
-      } else {
-        cols[k] = newIndex[c];
-        coefs[k++] = o.coefs()[i];
-      }
-    }
-    Objective objective = new Objective(o.minimize(), Arrays.copyOf(cols, k), Arrays.copyOf(coefs, k), constant);
+    Terms t = Terms.of(o.cols(), o.coefs(), newIndex, fixed);
+    Objective objective = new Objective(o.minimize(), t.cols(), t.coefs(), o.constant() + t.constant());
     Milp reduced = new Milp(model.name(), vars, rows, objective);
     return new Reduction(model, reduced, keptCols.stream().mapToInt(Integer::intValue).toArray(), fixed, infeasible);
+  }
+
+  /** A row's or the objective's terms in the reduced columns, and what the fixed columns add up to. */
+  private record Terms(int[] cols, double[] coefs, double constant) {
+    static Terms of(int[] cols, double[] coefs, int[] newIndex, double[] fixed) {
+      double constant = 0;
+      int[] kept = new int[cols.length];
+      double[] keptCoefs = new double[cols.length];
+      int k = 0;
+      for (int i = 0; i < cols.length; i++) {
+        int c = cols[i];
+        if (newIndex[c] < 0) {
+          constant += coefs[i] * fixed[c];
+        } else {
+          kept[k] = newIndex[c];
+          keptCoefs[k++] = coefs[i];
+        }
+      }
+      return new Terms(Arrays.copyOf(kept, k), Arrays.copyOf(keptCoefs, k), constant);
+    }
   }
 
   /** The original model. */

@@ -95,7 +95,7 @@ public final class ArrivalScan {
       if (!lp.status().hasSolution()) {
         return none(t0, solves, 0, "zone-free LP relaxation: " + lp.summary());
       }
-      int first = meanStep(arrivals, lp.values());
+      int first = (int) Math.floor(meanStep(arrivals, lp.values()) + 1e-9);
       // galloping from the relaxation's step (1, 2, 4, ... steps on) until one gives a point, then a
       // bisection between the last that gave none and it: an early step that gives no point is
       // quick to refute, a late one is slow to find (its path meets more slots of the zones)
@@ -184,7 +184,7 @@ public final class ArrivalScan {
       }
       double[] x = r.values();
       last = x.clone();
-      Map<String, Set<Integer>> broken = brokenSlots(model, x);
+      Map<String, Set<Integer>> broken = WarmStarts.brokenSlots(model, x);
       if (broken.isEmpty()) {
         WarmStarts.setFaces(model, x);
         if (!(model.maxViolation(x) <= WarmStarts.TOLERANCE)) {
@@ -217,13 +217,7 @@ public final class ArrivalScan {
     int solves = 0;
     Milp zoneFree = WarmStarts.restricted(model, Set.of());
     for (List<Variable> group : groups.values()) {
-      double mass = 0;
-      double mean = 0;
-      for (Variable v : group) {
-        mass += x[v.index()];
-        mean += x[v.index()] * v.origin().step();
-      }
-      long centre = Math.round(mean / Math.max(mass, 1e-9));
+      long centre = Math.round(meanStep(group, x));
       for (int t = 0; t < VISIT_TRIES; t++) {
         long step = centre + (t % 2 == 1 ? (t + 1) / 2 : -(t / 2));
         Variable chosen = group.stream().filter(v -> v.origin().step() == step).findFirst().orElse(null);
@@ -263,31 +257,15 @@ public final class ArrivalScan {
     return cols;
   }
 
-  /** The LP relaxation's mean arrival step, rounded down. */
-  private static int meanStep(List<Variable> arrivals, double[] x) {
+  /** The mean step of a group of step binaries (arrival or visit) at the LP point {@code x}. */
+  private static double meanStep(List<Variable> group, double[] x) {
     double mass = 0;
     double mean = 0;
-    for (Variable v : arrivals) {
+    for (Variable v : group) {
       mass += x[v.index()];
       mean += x[v.index()] * v.origin().step();
     }
-    return mass <= 0 ? arrivals.get(0).origin().step() : (int) Math.floor(mean / mass + 1e-9);
-  }
-
-  /**
-   * The slots each zone's cover row shows broken at {@code x}: no face holds and the arrival
-   * relaxation does not make up for it.
-   */
-  private static Map<String, Set<Integer>> brokenSlots(Milp model, double[] x) {
-    Map<Integer, Double> margin = WarmStarts.margins(model, x);
-    Map<String, Set<Integer>> broken = new TreeMap<>();
-    for (Row r : model.rows()) {
-      if (r.origin().role().equals("cover") && WarmStarts.bestFace(model, r, margin) < 0
-          && WarmStarts.rest(model, r, x) < r.lower() - WarmStarts.TOLERANCE) {
-        broken.computeIfAbsent(r.origin().entity(), k -> new TreeSet<>()).add(r.origin().step());
-      }
-    }
-    return broken;
+    return mass <= 0 ? group.get(0).origin().step() : mean / mass;
   }
 
   /**

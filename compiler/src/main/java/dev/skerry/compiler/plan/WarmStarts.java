@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.TreeMap;
 import java.util.TreeSet;
 
 /**
@@ -120,11 +121,19 @@ public final class WarmStarts {
 
   /** The zones with a cover row that no face, and no arrival, satisfies at {@code x}. */
   static Set<String> brokenZones(Milp model, double[] x) {
+    return new TreeSet<>(brokenSlots(model, x).keySet());
+  }
+
+  /**
+   * The slots (cover rows, by step) of each zone that {@code x} breaks: no face holds and the
+   * arrival relaxation does not make up for it.
+   */
+  static Map<String, Set<Integer>> brokenSlots(Milp model, double[] x) {
     Map<Integer, Double> margin = margins(model, x);
-    Set<String> broken = new TreeSet<>();
+    Map<String, Set<Integer>> broken = new TreeMap<>();
     for (Row r : model.rows()) {
       if (r.origin().role().equals("cover") && bestFace(model, r, margin) < 0 && rest(model, r, x) < r.lower() - TOLERANCE) {
-        broken.add(r.origin().entity());
+        broken.computeIfAbsent(r.origin().entity(), k -> new TreeSet<>()).add(r.origin().step());
       }
     }
     return broken;

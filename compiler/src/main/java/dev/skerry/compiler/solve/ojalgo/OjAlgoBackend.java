@@ -344,6 +344,25 @@ public final class OjAlgoBackend implements SolverBackend {
     return options.timeLimit().map(limit -> elapsed.compareTo(limit) >= 0).orElse(false);
   }
 
+  /**
+   * An answer of ojAlgo's that a stop makes no proof of (see the class comment): reported as {@code
+   * status}, stopped for the stop's reason, with a warning saying why.
+   */
+  private static void noProofAfterStop(
+      SolveResult.Builder result, Outcome outcome, String answered, SolveStatus status, String reportedAs) {
+    result
+        .status(status)
+        .stopReason(outcome.stopped())
+        .warning(
+            "ojAlgo answered "
+                + answered
+                + " after it was stopped ("
+                + outcome.stopped().name().toLowerCase(java.util.Locale.ROOT)
+                + "); it drops a node whose LP the stop cut short as if infeasible, so that is no"
+                + " proof: reported as "
+                + reportedAs);
+  }
+
   static void describe(Milp milp, Outcome outcome, SolveResult.Builder result) {
     if (outcome.abandoned()) {
       result
@@ -368,14 +387,7 @@ public final class OjAlgoBackend implements SolverBackend {
           // the same pruning as for INFEASIBLE below: nodes whose LP the stop cut short are dropped,
           // the tree empties, and ojAlgo calls its incumbent optimal (measured: the full harbour
           // with the arrival scan's start, "optimal" at 52.83 where 50.80 exists)
-          result
-              .status(SolveStatus.FEASIBLE)
-              .stopReason(outcome.stopped())
-              .warning(
-                  "ojAlgo answered OPTIMAL after it was stopped ("
-                      + outcome.stopped().name().toLowerCase(java.util.Locale.ROOT)
-                      + "); it drops a node whose LP the stop cut short, so that is no proof:"
-                      + " reported as feasible");
+          noProofAfterStop(result, outcome, "OPTIMAL", SolveStatus.FEASIBLE, "feasible");
         } else {
           result.status(SolveStatus.OPTIMAL).stopReason(StopReason.FINISHED);
         }
@@ -387,14 +399,7 @@ public final class OjAlgoBackend implements SolverBackend {
       case INFEASIBLE -> {
         if (stopped) {
           // ojAlgo prunes nodes whose LP the limit cut short as infeasible: see the class comment
-          result
-              .status(SolveStatus.NO_SOLUTION_FOUND)
-              .stopReason(outcome.stopped())
-              .warning(
-                  "ojAlgo answered INFEASIBLE after it was stopped ("
-                      + outcome.stopped().name().toLowerCase(java.util.Locale.ROOT)
-                      + "); it counts a node whose LP the stop cut short as infeasible, so that is"
-                      + " no proof: reported as no plan found");
+          noProofAfterStop(result, outcome, "INFEASIBLE", SolveStatus.NO_SOLUTION_FOUND, "no plan found");
         } else {
           result.status(SolveStatus.INFEASIBLE).stopReason(StopReason.FINISHED);
         }
