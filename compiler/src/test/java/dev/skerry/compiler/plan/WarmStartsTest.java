@@ -28,7 +28,7 @@ class WarmStartsTest {
   static final Duration CAP = Duration.ofSeconds(30);
 
   static List<String> names() {
-    return ExampleScenarios.NAMES;
+    return ExampleScenarios.PLANAR_SINGLE;
   }
 
   /** The start is a plan: the model accepts it, the verifier accepts it, and it is no better than the optimum. */
