@@ -21,6 +21,13 @@ import java.util.List;
  *       than {@link #TOLERANCE}, makes the model infeasible ({@link #infeasibleRow}).
  * </ul>
  *
+ * Then a row that no point within the final bounds can break is dropped: its least and greatest
+ * activity over the bounds lie within its own bounds. Such rows are not harmless to ojAlgo: a
+ * cluster-containment row of the rock field, {@code -cymax + 1e-6·a ≤ -14.05} with {@code cymax ≥
+ * 23.55}, led its model simplification to fix the binary {@code a} at 0, which made the root LP
+ * infeasible where SCIP and cbc find plans with {@code a = 1} (measured; the reason inside ojAlgo
+ * was not traced further).
+ *
  * The zone-by-zone warm start fixes most face binaries of the model it solves; without them the
  * harbour example's zone-free model has 389 columns instead of 1,524 (common practice in MILP
  * presolve; ojAlgo measured in BENCHMARKS.md).
@@ -92,7 +99,28 @@ public final class Reduction {
         }
       }
     }
+    if (infeasible == null) {
+      for (Row r : model.rows()) {
+        dropped[r.index()] |= redundant(r, lo, hi);
+      }
+    }
     return build(model, lo, hi, dropped, infeasible);
+  }
+
+  /**
+   * Whether no point within the bounds can break {@code r}: its least and greatest activity over
+   * the bounds lie within its own bounds (no tolerance, so dropping it changes nothing).
+   */
+  private static boolean redundant(Row r, double[] lo, double[] hi) {
+    double least = 0;
+    double most = 0;
+    for (int i = 0; i < r.cols().length; i++) {
+      double a = r.coefs()[i];
+      int c = r.cols()[i];
+      least += a > 0 ? a * lo[c] : a * hi[c];
+      most += a > 0 ? a * hi[c] : a * lo[c];
+    }
+    return least >= r.lower() && most <= r.upper();
   }
 
   /** Narrows {@code lo/hi} of column {@code v} to {@code lower ≤ a·x ≤ upper}. */

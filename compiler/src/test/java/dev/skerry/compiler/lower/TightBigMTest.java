@@ -93,6 +93,43 @@ class TightBigMTest {
     assertTrue(checked > 50, "too few big-M rows checked: " + checked);
   }
 
+  /**
+   * With its binary at 1 a containment row pins a cluster side at the zone's edge; for the zone
+   * with the extreme edge that is the end of the side's range. The range must still hold a value
+   * the row allows in exact decimal arithmetic on the numbers as written (the shortest decimal of
+   * each double, as a solver that reads numbers exactly does): on the rock field, before the ranges
+   * were widened by the big-M padding, edge + M − M came out 1e-14 short of the range and ojAlgo's
+   * model simplification fixed that zone's assignment binaries at 0, making the model infeasible.
+   */
+  @org.junit.jupiter.api.Test
+  void anActiveContainmentRowLeavesTheSideARangeValueInExactArithmetic() {
+    Milp m = Lowering.lower(dev.skerry.compiler.plan.ExampleScenarios.full("rock_field"));
+    int checked = 0;
+    for (Row r : m.rows()) {
+      if (!r.origin().role().equals("contain")) {
+        continue;
+      }
+      java.math.BigDecimal rest = java.math.BigDecimal.valueOf(r.upper());
+      Variable side = null;
+      double sign = 0;
+      for (int i = 0; i < r.size(); i++) {
+        Variable v = m.variables().get(r.cols()[i]);
+        if (v.type() == VarType.BINARY) {
+          rest = rest.subtract(java.math.BigDecimal.valueOf(r.coefs()[i]));
+        } else {
+          side = v;
+          sign = r.coefs()[i];
+        }
+      }
+      // sign·side ≤ rest: the side's lower bound (sign +1) or upper bound (sign −1) must satisfy it
+      java.math.BigDecimal best = java.math.BigDecimal.valueOf(sign > 0 ? side.lower() : -side.upper());
+      assertTrue(best.compareTo(rest) <= 0, "row " + r.name() + " with its binary at 1 leaves no value of "
+          + side.name() + " in its range: needs " + best + " ≤ " + rest);
+      checked++;
+    }
+    assertTrue(checked > 100, "too few containment rows checked: " + checked);
+  }
+
   private static double binaryCoefficient(Milp m, Row r) {
     for (int i = 0; i < r.size(); i++) {
       if (m.variables().get(r.cols()[i]).type() == VarType.BINARY) {

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.Test;
 class ReductionTest {
   /**
    * x fixed at 2; the row x + y ≤ 5 keeps y only and becomes y ≤ 3; −2z ≤ −3 with z integer
-   * becomes z ≥ 2 (1.5 rounded up); w + z ≥ 1 keeps two columns and stays.
+   * becomes z ≥ 2 (1.5 rounded up); w + z ≥ 4 keeps two columns and stays.
    */
   private static Milp sample() {
     MilpBuilder b = new MilpBuilder("sample");
@@ -20,7 +20,7 @@ class ReductionTest {
     Variable w = b.newContinuous("w", 0, 10, Origin.NONE);
     b.addLessOrEqual("xy", LinearExpr.of(x).add(y), 5, Origin.NONE);
     b.addLessOrEqual("z_low", LinearExpr.of(z, -2), -3, Origin.NONE);
-    b.addGreaterOrEqual("wz", LinearExpr.of(w).add(z), 1, Origin.NONE);
+    b.addGreaterOrEqual("wz", LinearExpr.of(w).add(z), 4, Origin.NONE);
     b.minimize(LinearExpr.of(x, 3).add(y, -1).add(z).add(w));
     return b.build();
   }
@@ -45,12 +45,30 @@ class ReductionTest {
   void pointsMapBackWithTheSameObjective() {
     Milp m = sample();
     Reduction red = Reduction.of(m);
-    double[] reducedPoint = {3, 2, 0};
+    double[] reducedPoint = {3, 2, 2};
     double[] x = red.expand(reducedPoint);
-    assertArrayEquals(new double[] {2, 3, 2, 0}, x, 0);
+    assertArrayEquals(new double[] {2, 3, 2, 2}, x, 0);
     assertEquals(red.reduced().objective().value(reducedPoint), m.objective().value(x), 1e-12);
     assertEquals(0, m.maxViolation(x), 1e-12);
     assertArrayEquals(reducedPoint, red.restrict(x), 0);
+  }
+
+  /**
+   * A row no point within the bounds can break goes; one that some point breaks stays. The first is
+   * the shape of a cluster-containment row whose big-M is almost 0 (c ≥ 23.55 already, the row asks
+   * c ≥ 14.05 + 1e-6·a), which ojAlgo's simplification mishandled.
+   */
+  @Test
+  void aRowTheBoundsAlreadyKeepIsDropped() {
+    MilpBuilder b = new MilpBuilder("slack");
+    Variable c = b.newContinuous("c", 23.55, 91.65, Origin.NONE);
+    Variable a = b.newBinary("a", Origin.NONE);
+    b.addLessOrEqual("idle", LinearExpr.of(c, -1).add(a, 1e-6), -14.05, Origin.NONE);
+    b.addLessOrEqual("tight", LinearExpr.of(c, -1).add(a, 70), -24, Origin.NONE);
+    b.minimize(LinearExpr.of(c));
+    Reduction red = Reduction.of(b.build());
+    assertEquals(1, red.removedRows());
+    assertEquals("tight", red.reduced().rows().get(0).name());
   }
 
   @Test

@@ -263,10 +263,11 @@ public final class OjAlgoBackend implements SolverBackend {
     boolean unexplainedFailure =
         result.status() == SolveStatus.ERROR && outcome.stopped() == StopReason.FINISHED;
     boolean mayBeUnbounded = result.status().hasSolution() && ObjectiveBound.mayBeUnbounded(milp);
-    // ojAlgo's own INFEASIBLE, even from a search no limit stopped, is not proof: on the full rock
-    // field it answered INFEASIBLE in under 3 s (LP relaxation optimal, and SCIP and cbc find
-    // plans), presumably a node LP that failed and was pruned as infeasible. Only an infeasible LP
-    // relaxation confirms it.
+    // ojAlgo's own INFEASIBLE, even from a search no limit stopped, is not proof: it prunes every
+    // node whose LP did not end OPTIMAL, failed ones included. On the full rock field it answered
+    // INFEASIBLE in under 3 s (LP relaxation optimal, SCIP and cbc find plans): its model
+    // simplification had fixed assignment binaries at 0 over a containment row 1e-14 short in exact
+    // arithmetic (fixed in ClusterLayout). Only an infeasible LP relaxation confirms it.
     boolean unconfirmedInfeasible = result.status() == SolveStatus.INFEASIBLE;
     if (!unexplainedFailure && !mayBeUnbounded && !unconfirmedInfeasible) {
       return;
