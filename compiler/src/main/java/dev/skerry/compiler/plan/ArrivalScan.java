@@ -210,7 +210,7 @@ public final class ArrivalScan {
       SolverBackend backend, SolveOptions options, Duration budget, long t0) {
     Map<String, List<Variable>> groups = new TreeMap<>();
     for (Variable v : model.variables()) {
-      if (v.origin().role().equals("visit") && !fixed.containsKey(v.index())) {
+      if (v.origin().role().equals("visit") && v.lower() < v.upper() && !fixed.containsKey(v.index())) {
         groups.computeIfAbsent(v.origin().owner() + "/" + v.origin().entity(), k -> new ArrayList<>()).add(v);
       }
     }
@@ -241,11 +241,14 @@ public final class ArrivalScan {
   /** Visit steps tried around the LP's for each waypoint. */
   static final int VISIT_TRIES = 9;
 
-  /** The arrival binaries of the model's one target, in step order; empty unless there is exactly one set. */
+  /**
+   * The free arrival binaries of the model's one target, in step order; empty unless there is
+   * exactly one set (fixed ones, such as an earlier vehicle's in {@link FleetStarts}, do not count).
+   */
   static List<Variable> arrivalColumns(Milp model) {
     Map<String, List<Variable>> byTarget = new TreeMap<>();
     for (Variable v : model.variables()) {
-      if (v.origin().role().equals("arrive")) {
+      if (v.origin().role().equals("arrive") && v.lower() < v.upper()) {
         byTarget.computeIfAbsent(v.origin().owner() + "/" + v.origin().entity(), k -> new ArrayList<>()).add(v);
       }
     }
@@ -287,7 +290,8 @@ public final class ArrivalScan {
       int face = WarmStarts.bestFace(model, cover, margin);
       boolean relaxed = WarmStarts.rest(model, cover, x) >= cover.lower() - WarmStarts.TOLERANCE;
       for (int c : cover.cols()) {
-        if (!WarmStarts.isFace(model.variables().get(c))) {
+        Variable v = model.variables().get(c);
+        if (!WarmStarts.isFace(v) || v.lower() == v.upper()) {
           continue;
         }
         if (near || (face < 0 && !relaxed)) {

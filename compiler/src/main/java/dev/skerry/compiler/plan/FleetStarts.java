@@ -11,8 +11,10 @@ import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.solve.SolverBackend;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 /**
@@ -39,7 +41,9 @@ public final class FleetStarts {
     long t0 = System.nanoTime();
     try {
       int n = s.vehicles().size();
-      Duration perRound = options.timeLimit().map(l -> l.dividedBy(n + 1)).orElse(cap.multipliedBy(2));
+      boolean slow = backend.branchesSlowly();
+      Duration perRound = slow ? Planner.scanBudget(options).dividedBy(n)
+          : options.timeLimit().map(l -> l.dividedBy(n + 1)).orElse(cap.multipliedBy(2));
       SolveOptions sub = options.withWarmStart(null).withTimeLimit(perRound);
       Milp previous = null;
       double[] values = null;
@@ -48,19 +52,20 @@ public final class FleetStarts {
         if (options.cancel().isCancelled()) {
           return none(t0, i - 1, "cancelled");
         }
-        Milp round = Lowering.lower(firstVehicles(s, i));
-        if (previous != null) {
-          round = fix(round, previous, values, fixed);
-        }
-        // The zone-by-zone heuristic first: with the earlier vehicles fixed, its restricted models
-        // hold one vehicle's nearby zones only; the round's whole model when it finds nothing.
-        WarmStarts.Start lazy = WarmStarts.find(round, backend, sub, cap);
+        Milp round = round(s, i, previous, values, fixed, slow);
+        // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
+        // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
+        // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
+        // model when it finds nothing.
+        WarmStarts.Start lazy = slow && ArrivalScan.applies(round) ? ArrivalScan.find(round, backend, sub, perRound)
+            : WarmStarts.find(round, backend, sub, cap);
         if (lazy.found()) {
           values = lazy.values();
         } else {
           SolveResult r = backend.solve(round, sub);
           if (!r.status().hasSolution()) {
-            return none(t0, i, "vehicle " + s.vehicles().get(i - 1).name() + " after the earlier ones: " + r.summary());
+            return none(t0, i, "vehicle " + s.vehicles().get(i - 1).name() + " after the earlier ones: " + r.summary()
+                + (lazy.reason().isEmpty() ? "" : " (before that: " + lazy.reason() + ")"));
           }
           values = r.values();
         }
@@ -106,12 +111,36 @@ public final class FleetStarts {
     return firstVehicles(s, count);
   }
 
-  /** {@code round} with the path columns of the vehicles in {@code vehicles} fixed to their values in the earlier round. */
-  private static Milp fix(Milp round, Milp earlier, double[] values, Set<String> vehicles) {
+  /**
+   * The model of round {@code i}: the first {@code i} vehicles, those in {@code fixed} held to the
+   * previous round's plan ({@code previous} and {@code values}; null in round 1), with their
+   * arrival binaries too when {@code arrivals}.
+   */
+  static Milp round(Scenario s, int i, Milp previous, double[] values, Set<String> fixed, boolean arrivals) {
+    Milp round = Lowering.lower(firstVehicles(s, i));
+    return previous == null ? round : fix(round, previous, values, fixed, arrivals);
+  }
+
+  /**
+   * {@code round} with the path columns of the vehicles in {@code vehicles} fixed to their values in
+   * the earlier round, and with {@code arrivals} their arrival binaries too, found by target and
+   * step (a one-vehicle round names them without the vehicle).
+   */
+  private static Milp fix(Milp round, Milp earlier, double[] values, Set<String> vehicles, boolean arrivals) {
+    Map<String, Variable> arrive = new HashMap<>();
+    for (Variable v : earlier.variables()) {
+      if (v.origin().role().equals("arrive")) {
+        arrive.put(v.origin().owner() + "/" + v.origin().entity() + "/" + v.origin().step(), v);
+      }
+    }
     List<Variable> vars = new ArrayList<>(round.columnCount());
     for (Variable v : round.variables()) {
-      Variable then = PATH.contains(v.origin().role()) && vehicles.contains(v.origin().entity())
-          ? earlier.variable(v.name()) : null;
+      boolean path = PATH.contains(v.origin().role()) && vehicles.contains(v.origin().entity());
+      Variable then = path ? earlier.variable(v.name()) : null;
+      if (arrivals && v.origin().role().equals("arrive") && vehicles.contains(v.origin().owner())) {
+        String rest = "/" + v.origin().entity() + "/" + v.origin().step();
+        then = arrive.getOrDefault(v.origin().owner() + rest, arrive.get(rest));
+      }
       if (then == null) {
         vars.add(v);
       } else {

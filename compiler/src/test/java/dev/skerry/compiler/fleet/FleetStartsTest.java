@@ -41,6 +41,25 @@ class FleetStartsTest {
         warm.solve().warnings().toString());
   }
 
+  /**
+   * With a backend whose branch and bound is slow (ojAlgo) each round runs the arrival scan (see
+   * {@code ArrivalScanTest} for the round's model): the start is a point of the whole model, no
+   * better than SCIP's optimum.
+   */
+  @Test
+  void aSlowBackendGivesAFeasiblePointNoBetterThanTheOptimum() {
+    Scenario s = dev.skerry.compiler.plan.ExampleScenarios.tiny("twin_skiffs");
+    Milp model = Lowering.lower(s);
+    SolverBackend ojalgo = Backends.standard().choose("ojalgo", null).backend();
+    WarmStarts.Start start = FleetStarts.find(s, model, ojalgo, SolveOptions.defaults()
+        .withTimeLimit(Duration.ofSeconds(60)), Duration.ofSeconds(30));
+    assertTrue(start.found(), start.reason());
+    assertTrue(model.maxViolation(start.values()) <= WarmStarts.TOLERANCE);
+    PlanResult best = Planner.standard().plan(s, "scip", Planner.optionsOf(s.plan()), SolveMonitor.NONE);
+    assertTrue(start.objective() >= best.solve().objective() - 1e-6, start.objective() + " below the optimum "
+        + best.solve().objective());
+  }
+
   @Test
   void aTargetNamedByALaterVehicleIsNotTakenByAnEarlierOne() {
     Scenario s = FleetScenarios.headOn(3);
