@@ -1,6 +1,7 @@
 package dev.skerry.compiler.solve.ojalgo;
 
 import dev.skerry.compiler.milp.Milp;
+import dev.skerry.compiler.milp.IncumbentFixing;
 import dev.skerry.compiler.milp.Reduction;
 import dev.skerry.compiler.solve.CancelToken;
 import dev.skerry.compiler.solve.Capability;
@@ -42,7 +43,10 @@ import org.ojalgo.type.context.NumberContext;
  *       infeasible when an M equalled a bound exactly (SOLVERS.md).
  *   <li>A warm start is given by setting every variable's value; ojAlgo checks it and takes it as
  *       its first incumbent only if it is feasible. With the optimum as start, the hop took 3.1 to
- *       3.5 s instead of about 9.
+ *       3.5 s instead of about 9. A start the model accepts also fixes, before the search, the
+ *       integer columns that alone would cost more than it ({@link IncumbentFixing}): the arrival
+ *       steps whose time exceeds the start's whole cost. The full ridge example went from 71 s to
+ *       42 s to a proven optimum (one run each).
  *   <li>ojAlgo checks its time limit only between branch-and-bound nodes, so the solve runs on a
  *       worker thread and this class keeps its own deadline. At the time limit, or on cancel, the
  *       limit in ojAlgo's options is set to zero: ojAlgo then stops at its next node and returns
@@ -80,6 +84,9 @@ public final class OjAlgoBackend implements SolverBackend {
 
   private static final Duration POLL = Duration.ofMillis(20);
 
+  /** The largest violation of the model a start may have to count as a feasible point. */
+  static final double FEASIBLE_START = 1e-6;
+
   static {
     ExpressionsBasedModel.clearPresolvers();
   }
@@ -115,7 +122,11 @@ public final class OjAlgoBackend implements SolverBackend {
     SolveResult.Builder result = SolveResult.builder(ID, SolveStatus.ERROR);
     try (ProgressTicker ticker = new ProgressTicker(ID, monitor, tick)) {
       Optional<double[]> warm = WarmStart.prepare(milp, options, result);
-      Reduction reduction = Reduction.of(milp);
+      // With a feasible start, the columns that alone would cost more than it are fixed before the
+      // search (a start the model rejects is only a hint: nothing is fixed by it).
+      Milp fixed = warm.filter(x -> milp.maxViolation(x) <= FEASIBLE_START)
+          .map(x -> IncumbentFixing.apply(milp, milp.objective().value(x))).orElse(milp);
+      Reduction reduction = Reduction.of(fixed);
       if (reduction.infeasibleRow() != null) {
         result
             .status(SolveStatus.INFEASIBLE)
