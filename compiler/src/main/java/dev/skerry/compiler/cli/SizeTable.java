@@ -36,6 +36,10 @@ final class SizeTable {
     if (r.comparison() != null) {
       row(out, r.comparisonLabel(), r.comparison());
     }
+    if (r.comparison() != null && !result.scenario().plan().clustered()) {
+      out.println("  (the clustered row is a size only: a cluster's box covers whole zones and can close a"
+          + " passage the plan needs; `skerry compare` flies both)");
+    }
     Sizes w = r.asWritten();
     out.printf(Locale.ROOT, "  binaries as written: %,d box-zone faces, %,d polygon faces, %,d arrival, %,d waypoint,"
             + " %,d cluster assignment, %,d cluster avoidance%s%n", w.zoneBoxBinaries(), w.zonePolygonBinaries(),

@@ -30,6 +30,17 @@ class CheckCommandTest {
     Run r = run("check", "../examples/harbour_survey.skerry");
     assertEquals(0, r.code(), r.out() + r.err());
     assertTrue(r.out().contains("harbour_survey.skerry: ok"), r.out());
+    // the harbour's 2-cluster plan is infeasible (the boxes close the cove): its row says it is a size only
+    assertTrue(r.out().contains("with 2 clusters, ordered"), r.out());
+    assertTrue(r.out().contains("the clustered row is a size only"), r.out());
+  }
+
+  @Test
+  void aClusteredPlansComparisonNeedsNoSuchRemark() {
+    Run r = run("check", "../examples/rock_field.skerry");
+    assertEquals(0, r.code(), r.out() + r.err());
+    assertTrue(r.out().contains("without clusters"), r.out());
+    assertTrue(!r.out().contains("size only"), r.out());
   }
 
   @Test
