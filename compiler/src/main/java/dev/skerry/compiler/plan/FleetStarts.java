@@ -62,7 +62,10 @@ public final class FleetStarts {
         if (lazy.found()) {
           values = lazy.values();
         } else {
-          SolveResult r = backend.solve(round, sub);
+          // a slow backend's scan may have used its whole share; the round's model gets what is left
+          Duration left = perRound.minus(lazy.wallTime());
+          SolveResult r = backend.solve(round, slow ? sub.withTimeLimit(left.isNegative() || left.isZero()
+              ? Duration.ofMillis(1) : left) : sub);
           if (!r.status().hasSolution()) {
             return none(t0, i, "vehicle " + s.vehicles().get(i - 1).name() + " after the earlier ones: " + r.summary()
                 + (lazy.reason().isEmpty() ? "" : " (before that: " + lazy.reason() + ")"));
