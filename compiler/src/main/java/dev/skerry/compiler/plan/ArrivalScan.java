@@ -40,7 +40,7 @@ import java.util.TreeSet;
  *       binaries free, every other slot gets the face that holds at the point with the largest
  *       margin (a side the path already keeps), and the rows those fixings leave idle are dropped.
  *       Solve again. A solve with no point widens the window ({@link #WINDOWS}). When the point
- *       clears every zone it is a start.
+ *       clears every zone it is a start, and later steps begin with the window that gave it.
  *   <li>The steps are tried galloping (k, k + 1, k + 3, k + 7, ...) until one gives a point, then
  *       by bisection between the last that gave none and the earliest that gave one; the cheapest
  *       point is kept. A step that gives no point is not proven infeasible (a solve may stop at its
@@ -107,10 +107,14 @@ public final class ArrivalScan {
       WarmStarts.Start best = null;
       int probe = lo;
       int stride = 1;
+      int window = WINDOWS[0];
       while (lo <= hi && !left(budget, t0).isZero() && !options.cancel().isCancelled()) {
-        Attempt a = atStep(model, arrivals.get(probe), arrivals, backend, options, budget, t0);
+        Attempt a = atStep(model, arrivals.get(probe), arrivals, backend, options, budget, t0, window);
         solves += a.solves();
         if (a.start() != null) {
+          // the next steps start from the window that worked: on the warehouse, windows 2 and 6 never
+          // let the path round a long shelf's end, and retrying them at every step cost 3 s a step
+          window = a.window();
           boolean better = best == null || (model.objective().minimize()
               ? a.start().objective() < best.objective() : a.start().objective() > best.objective());
           if (better) {
@@ -138,11 +142,15 @@ public final class ArrivalScan {
     }
   }
 
-  private record Attempt(WarmStarts.Start start, int solves) {}
+  private record Attempt(WarmStarts.Start start, int solves, int window) {
+    Attempt(WarmStarts.Start start, int solves) {
+      this(start, solves, WINDOWS[0]);
+    }
+  }
 
-  /** The lazy-zone rounds with the arrival fixed at {@code arrival}'s step. */
+  /** The lazy-zone rounds with the arrival fixed at {@code arrival}'s step, from window {@code firstWindow}. */
   private static Attempt atStep(Milp model, Variable arrival, List<Variable> arrivals, SolverBackend backend,
-      SolveOptions options, Duration budget, long t0) {
+      SolveOptions options, Duration budget, long t0, int firstWindow) {
     Map<Integer, Double> fixed = new HashMap<>();
     for (Variable v : arrivals) {
       fixed.put(v.index(), v == arrival ? 1.0 : 0.0);
@@ -159,7 +167,7 @@ public final class ArrivalScan {
     Set<String> active = new TreeSet<>();
     Map<String, Set<Integer>> everBroken = new TreeMap<>();
     double[] last = null;
-    int window = WINDOWS[0];
+    int window = firstWindow;
     for (int round = 1; round <= MAX_ROUNDS; round++) {
       if (left(budget, t0).isZero()) {
         return new Attempt(null, solves);
@@ -191,7 +199,7 @@ public final class ArrivalScan {
           return new Attempt(null, solves);
         }
         return new Attempt(new WarmStarts.Start(x, model.objective().value(x), WarmStarts.since(t0), solves,
-            active.size(), ""), solves);
+            active.size(), ""), solves, window);
       }
       active.addAll(broken.keySet());
       broken.forEach((zone, slots) -> everBroken.computeIfAbsent(zone, k -> new TreeSet<>()).addAll(slots));
