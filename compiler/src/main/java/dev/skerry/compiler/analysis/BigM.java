@@ -12,11 +12,6 @@ public final class BigM {
 
   private BigM() {}
 
-  /** The padding added to a value of size {@code v}: relative plus absolute. */
-  public static double margin(double v) {
-    return RELATIVE * Math.abs(v) + ABSOLUTE;
-  }
-
   /** The padded constant covering a worst-case violation {@code raw}. */
   public static double pad(double raw) {
     double m = Math.max(raw, 0);

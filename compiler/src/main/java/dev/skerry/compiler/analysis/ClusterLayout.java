@@ -92,14 +92,9 @@ public record ClusterLayout(int count, SymmetryRule rule, List<Range> sides, Lis
         hi[i] = Math.max(hi[i], v[i]);
       }
     }
-    // Each range is widened by the big-M padding. Without it the zone with the extreme edge pins the
-    // side at the range's end when assigned, and the row cb + M·a ≤ edge + M leaves it exactly
-    // edge + M − M: in exact decimal arithmetic that came out 1e-14 short of the bound on the rock
-    // field, and ojAlgo's model simplification then fixed that zone's assignment binaries at 0,
-    // making the whole model infeasible to it (SCIP and cbc, with tolerances, were unaffected).
     List<Range> out = new ArrayList<>(4);
     for (int i = 0; i < 4; i++) {
-      out.add(new Range(lo[i] - BigM.margin(lo[i]), hi[i] + BigM.margin(hi[i])));
+      out.add(new Range(lo[i], hi[i]));
     }
     return out;
   }

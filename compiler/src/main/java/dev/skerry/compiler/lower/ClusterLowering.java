@@ -6,6 +6,7 @@ import dev.skerry.compiler.milp.Origin;
 import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
+import java.math.BigDecimal;
 import java.util.List;
 
 /**
@@ -56,7 +57,7 @@ final class ClusterLowering {
       for (int side = 0; side < 4; side++) {
         double sign = side % 2 == 0 ? 1 : -1;
         LinearExpr e = LinearExpr.of(cb[side], sign).add(a[o][l], m[side]);
-        c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[side], e, sign * edge[side] + m[side], origin);
+        c.builder.addLessOrEqual("cin_" + tag + "_" + SIDES[side], e, roomAtOne(sign * edge[side], m[side]), origin);
       }
     }
     for (int o = 0; o < cl.zoneCount(); o++) {
@@ -64,6 +65,25 @@ final class ClusterLowering {
           Origin.of(cl.zoneNames().get(o), "assign-once"));
     }
     symmetry(c, cl, a);
+  }
+
+  /**
+   * The right-hand side {@code bound + m} of a containment row {@code sign·side + m·a ≤ bound + m},
+   * raised by a few units in the last place if need be so that with {@code a = 1} the side may
+   * still reach {@code bound} exactly when the numbers are read as the decimals they print as. The
+   * zone with the extreme edge pins the side at the end of its range; without this, edge + M − M
+   * came out 1e-14 short of the range on the rock field, and ojAlgo's model simplification (which
+   * computes in decimals) fixed that zone's assignment binaries at 0 and called the model
+   * infeasible. Solvers with tolerances were unaffected, and the raise is far below them.
+   */
+  static double roomAtOne(double bound, double m) {
+    BigDecimal exact = BigDecimal.valueOf(bound);
+    BigDecimal big = BigDecimal.valueOf(m);
+    double rhs = bound + m;
+    while (BigDecimal.valueOf(rhs).subtract(big).compareTo(exact) < 0) {
+      rhs = Math.nextUp(rhs);
+    }
+    return rhs;
   }
 
   private static void symmetry(LoweringContext c, ClusterLayout cl, Variable[][] a) {

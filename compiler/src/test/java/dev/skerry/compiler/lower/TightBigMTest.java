@@ -97,9 +97,10 @@ class TightBigMTest {
    * With its binary at 1 a containment row pins a cluster side at the zone's edge; for the zone
    * with the extreme edge that is the end of the side's range. The range must still hold a value
    * the row allows in exact decimal arithmetic on the numbers as written (the shortest decimal of
-   * each double, as a solver that reads numbers exactly does): on the rock field, before the ranges
-   * were widened by the big-M padding, edge + M − M came out 1e-14 short of the range and ojAlgo's
-   * model simplification fixed that zone's assignment binaries at 0, making the model infeasible.
+   * each double, as a solver that reads numbers exactly does): on the rock field, before the
+   * right-hand sides were raised where needed ({@code ClusterLowering.roomAtOne}), edge + M − M came
+   * out 1e-14 short of the range and ojAlgo's model simplification fixed that zone's assignment
+   * binaries at 0, making the model infeasible.
    */
   @org.junit.jupiter.api.Test
   void anActiveContainmentRowLeavesTheSideARangeValueInExactArithmetic() {

@@ -65,9 +65,9 @@ public final class ExampleScenarios {
   /**
    * A version small enough for ojAlgo in a unit test (a few seconds each, measured): the small
    * version cut to a horizon just above its minimum time; for the rock field, only the three rocks
-   * beside the direct line, still in two clusters chosen by the MILP (2.6 s; before the cluster
-   * ranges were widened ojAlgo called every clustered rock field infeasible, see {@code
-   * ClusterLayout}).
+   * beside the direct line, still in two clusters chosen by the MILP (2–3 s; before the
+   * containment rows' right-hand sides were made exact, ojAlgo called every clustered rock field
+   * infeasible, see {@code ClusterLowering.roomAtOne}).
    */
   public static Scenario tiny(String name) {
     switch (name) {

@@ -278,7 +278,7 @@ public final class OjAlgoBackend implements SolverBackend {
     // node whose LP did not end OPTIMAL, failed ones included. On the full rock field it answered
     // INFEASIBLE in under 3 s (LP relaxation optimal, SCIP and cbc find plans): its model
     // simplification had fixed assignment binaries at 0 over a containment row 1e-14 short in exact
-    // arithmetic (fixed in ClusterLayout). Only an infeasible LP relaxation confirms it.
+    // arithmetic (fixed in ClusterLowering). Only an infeasible LP relaxation confirms it.
     boolean unconfirmedInfeasible = result.status() == SolveStatus.INFEASIBLE;
     if (!unexplainedFailure && !mayBeUnbounded && !unconfirmedInfeasible) {
       return;
