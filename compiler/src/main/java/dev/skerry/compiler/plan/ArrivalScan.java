@@ -59,6 +59,15 @@ public final class ArrivalScan {
   static final int[] WINDOWS = {2, 6, Integer.MAX_VALUE / 2};
 
   /**
+   * A window of 0: every slot of the zones put back gets a face fixed, the one that holds at the
+   * point or, where none does, the one the point is nearest to (a plain LP, quick even for ojAlgo).
+   * Worth trying first where the zones are large boxes the path must run alongside, such as
+   * cluster boxes of known members ({@link ClusterStarts}): there the windows round every broken
+   * slot keep hundreds of face binaries free.
+   */
+  static final int NEAREST = 0;
+
+  /**
    * One small solve may take at most this share of the budget: a solve stopped at its limit with a
    * point still gives the next round its sides, and a step that will not work does not eat the
    * whole budget.
@@ -83,6 +92,15 @@ public final class ArrivalScan {
 
   /** A start for {@code model} found with {@code backend} within {@code budget} in all. */
   public static WarmStarts.Start find(Milp model, SolverBackend backend, SolveOptions options, Duration budget) {
+    return find(model, backend, options, budget, WINDOWS);
+  }
+
+  /**
+   * As {@link #find(Milp, SolverBackend, SolveOptions, Duration)}, widening the windows through
+   * {@code windows} (ascending, the last the whole zone; {@link #NEAREST} may come first).
+   */
+  static WarmStarts.Start find(Milp model, SolverBackend backend, SolveOptions options, Duration budget,
+      int[] windows) {
     long t0 = System.nanoTime();
     List<Variable> arrivals = arrivalColumns(model);
     if (arrivals.isEmpty()) {
@@ -107,9 +125,9 @@ public final class ArrivalScan {
       WarmStarts.Start best = null;
       int probe = lo;
       int stride = 1;
-      int window = WINDOWS[0];
+      int window = windows[0];
       while (lo <= hi && !left(budget, t0).isZero() && !options.cancel().isCancelled()) {
-        Attempt a = atStep(model, arrivals.get(probe), arrivals, backend, options, budget, t0, window);
+        Attempt a = atStep(model, arrivals.get(probe), arrivals, backend, options, budget, t0, windows, window);
         solves += a.solves();
         if (a.start() != null) {
           // the next steps start from the window that worked: on the warehouse, windows 2 and 6 never
@@ -144,13 +162,13 @@ public final class ArrivalScan {
 
   private record Attempt(WarmStarts.Start start, int solves, int window) {
     Attempt(WarmStarts.Start start, int solves) {
-      this(start, solves, WINDOWS[0]);
+      this(start, solves, -1);
     }
   }
 
   /** The lazy-zone rounds with the arrival fixed at {@code arrival}'s step, from window {@code firstWindow}. */
   private static Attempt atStep(Milp model, Variable arrival, List<Variable> arrivals, SolverBackend backend,
-      SolveOptions options, Duration budget, long t0, int firstWindow) {
+      SolveOptions options, Duration budget, long t0, int[] windows, int firstWindow) {
     Map<Integer, Double> fixed = new HashMap<>();
     for (Variable v : arrivals) {
       fixed.put(v.index(), v == arrival ? 1.0 : 0.0);
@@ -182,11 +200,11 @@ public final class ArrivalScan {
           visits.clear();
           continue;
         }
-        if (last == null || window >= WINDOWS[WINDOWS.length - 1]) {
+        if (last == null || window >= windows[windows.length - 1]) {
           return new Attempt(null, solves);
         }
         // the path may need to change sides further from where it ran into the zone: free more
-        window = WINDOWS[Arrays.binarySearch(WINDOWS, window) + 1];
+        window = windows[Arrays.binarySearch(windows, window) + 1];
         fixSides(model, active, everBroken, last, fixed, window);
         continue;
       }
@@ -293,10 +311,13 @@ public final class ArrivalScan {
         continue;
       }
       int slot = cover.origin().step();
-      boolean near = everBroken.getOrDefault(cover.origin().entity(), Set.of()).stream()
+      boolean near = window != NEAREST && everBroken.getOrDefault(cover.origin().entity(), Set.of()).stream()
           .anyMatch(s -> Math.abs(s - slot) <= window);
       int face = WarmStarts.bestFace(model, cover, margin);
       boolean relaxed = WarmStarts.rest(model, cover, x) >= cover.lower() - WarmStarts.TOLERANCE;
+      if (window == NEAREST && face < 0 && !relaxed) {
+        face = nearestFace(model, cover, margin);
+      }
       for (int c : cover.cols()) {
         Variable v = model.variables().get(c);
         if (!WarmStarts.isFace(v) || v.lower() == v.upper()) {
@@ -309,6 +330,20 @@ public final class ArrivalScan {
         }
       }
     }
+  }
+
+  /** The face column of a cover row with the largest margin, negative or not, or -1 if it has none. */
+  private static int nearestFace(Milp model, Row cover, Map<Integer, Double> margin) {
+    int best = -1;
+    double top = Double.NEGATIVE_INFINITY;
+    for (int c : cover.cols()) {
+      Double m = margin.get(c);
+      if (WarmStarts.isFace(model.variables().get(c)) && m != null && m > top) {
+        best = c;
+        top = m;
+      }
+    }
+    return best;
   }
 
   /**

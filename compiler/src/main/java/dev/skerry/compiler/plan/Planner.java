@@ -107,7 +107,8 @@ public final class Planner {
    */
   public PlanResult plan(Scenario s, String solverId, SolveOptions options, SolveMonitor monitor,
       java.util.function.Function<Milp, double[]> hint) {
-    Milp milp = Lowering.lower(s);
+    Lowering.Lowered lowered = Lowering.lowerWithLayout(s);
+    Milp milp = lowered.milp();
     Backends.Choice choice = backends.choose(solverId == null ? s.plan().solver() : solverId, milp);
     SolverBackend backend = choice.backend();
     SolveOptions run = options;
@@ -124,15 +125,18 @@ public final class Planner {
       // solve and cost more than it saved (twin_skiffs: 12.2 s with it, 5.5 s without); planning the
       // vehicles one after another costs about one single-vehicle solve per vehicle instead.
       boolean scan = !s.fleet() && backend.branchesSlowly() && ArrivalScan.applies(milp);
+      boolean grouped = scan && ClusterStarts.applies(s, lowered.layout().clusters(), milp);
       WarmStarts.Start start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
+          : grouped ? ClusterStarts.find(s, lowered.layout().clusters(), milp, backend, options, scanBudget(options))
           : scan ? ArrivalScan.find(milp, backend, options, scanBudget(options))
           : WarmStarts.find(milp, backend, options, WARM_START_CAP);
       run = lessTime(start.found() ? options.withWarmStart(start.values()) : run, options, start);
       if (!start.found()) {
         notes.add("no warm start: " + start.reason());
       } else if (scan) {
-        notes.add(String.format(Locale.ROOT, "warm start: arrival scan, objective %.6g found in %.2f s (%d small"
-            + " solves)", start.objective(), start.wallTime().toNanos() / 1e9, start.rounds()));
+        notes.add(String.format(Locale.ROOT, "warm start: arrival scan%s, objective %.6g found in %.2f s"
+            + " (%d small solves)", grouped ? " with the zones grouped into clusters first" : "", start.objective(),
+            start.wallTime().toNanos() / 1e9, start.rounds()));
       } else if (s.fleet()) {
         notes.add(String.format(Locale.ROOT, "warm start: vehicles planned one after another, objective %.6g"
             + " in %.2f s", start.objective(), start.wallTime().toNanos() / 1e9));
