@@ -10,6 +10,7 @@ import dev.skerry.compiler.lower.Lowering;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.solve.Backends;
+import dev.skerry.compiler.solve.SolveMonitor;
 import dev.skerry.compiler.solve.SolveOptions;
 import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.solve.SolverBackend;
@@ -124,5 +125,17 @@ class ClusterStartsTest {
     assertTrue(start.found(), start::reason);
     assertTrue(m.maxViolation(start.values()) <= WarmStarts.TOLERANCE);
     assertTrue(Verifier.verify(s, PlanExtractor.trajectory(s, m, start.values())).ok());
+  }
+
+  /** The planner takes this way for ojAlgo on a clustered model, says so, and its plan is verified. */
+  @Test
+  void thePlannerGroupsTheZonesFirstForOjAlgo() {
+    Scenario s = threeRocks();
+    SolveOptions o = Planner.optionsOf(s.plan()).withTimeLimit(Duration.ofSeconds(60));
+    PlanResult r = Planner.standard().plan(s, "ojalgo", o, SolveMonitor.NONE);
+    assertTrue(r.solve().status().hasSolution(), r.solve()::summary);
+    assertTrue(r.verified(), () -> String.valueOf(r.verify()));
+    assertTrue(r.solve().warnings().stream().anyMatch(w -> w.contains("grouped into clusters first")),
+        r.solve().warnings()::toString);
   }
 }
