@@ -6,6 +6,7 @@ import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
 import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.solve.SolveOptions;
 import dev.skerry.compiler.solve.SolverBackend;
@@ -61,8 +62,13 @@ public final class ClusterStarts {
     WarmStarts.Start best = null;
     int solves = 0;
     int tried = 0;
+    String failure = "";
     try {
-      List<int[]> groupings = groupings(clusters, s.vehicle().start(), s.target().region().bounds().center());
+      List<Target> targets = s.candidateTargets(s.vehicle());
+      if (targets.size() != 1) {
+        return ArrivalScan.find(model, backend, options, budget);
+      }
+      List<int[]> groupings = groupings(clusters, s.vehicle().start(), targets.get(0).region().bounds().center());
       for (int[] label : groupings) {
         Duration left = budget.minus(WarmStarts.since(t0));
         if (best != null || tried == MAX_TRIES || left.compareTo(MIN_TRY) < 0 || options.cancel().isCancelled()) {
@@ -78,6 +84,7 @@ public final class ClusterStarts {
       }
     } catch (RuntimeException e) {
       best = null;
+      failure = " (grouping failed: " + e + ")";
     }
     if (best != null) {
       return new WarmStarts.Start(best.values(), best.objective(), WarmStarts.since(t0), solves, best.zonesUsed(),
@@ -85,7 +92,7 @@ public final class ClusterStarts {
     }
     Duration left = budget.minus(WarmStarts.since(t0));
     WarmStarts.Start plain = ArrivalScan.find(model, backend, options, left.isNegative() ? Duration.ZERO : left);
-    String why = tried + " grouping(s) of the zones into clusters gave no point";
+    String why = tried + " grouping(s) of the zones into clusters gave no point" + failure;
     return plain.found()
         ? new WarmStarts.Start(plain.values(), plain.objective(), WarmStarts.since(t0), solves + plain.rounds(),
             plain.zonesUsed(), "")
