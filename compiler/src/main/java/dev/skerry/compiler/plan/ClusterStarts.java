@@ -95,7 +95,7 @@ public final class ClusterStarts {
     String why = tried + " grouping(s) of the zones into clusters gave no point" + failure;
     return plain.found()
         ? new WarmStarts.Start(plain.values(), plain.objective(), WarmStarts.since(t0), solves + plain.rounds(),
-            plain.zonesUsed(), "")
+            plain.zonesUsed(), why + "; the plain scan found this one")
         : new WarmStarts.Start(null, Double.NaN, WarmStarts.since(t0), solves + plain.rounds(), 0,
             why + "; " + plain.reason());
   }

@@ -135,7 +135,8 @@ public final class Planner {
         notes.add("no warm start: " + start.reason());
       } else if (scan) {
         notes.add(String.format(Locale.ROOT, "warm start: arrival scan%s, objective %.6g found in %.2f s"
-            + " (%d small solves)", grouped ? " with the zones grouped into clusters first" : "", start.objective(),
+            + " (%d small solves)", !grouped ? "" : start.reason().isEmpty() ? " with the zones grouped into clusters first"
+            : " (" + start.reason() + ")", start.objective(),
             start.wallTime().toNanos() / 1e9, start.rounds()));
       } else if (s.fleet()) {
         notes.add(String.format(Locale.ROOT, "warm start: vehicles planned one after another, objective %.6g"

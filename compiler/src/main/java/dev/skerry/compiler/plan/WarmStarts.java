@@ -52,7 +52,7 @@ public final class WarmStarts {
    * @param wallTime time spent on all rounds
    * @param rounds restricted solves run
    * @param zonesUsed zones (or cluster boxes) put back in the last round
-   * @param reason why there is no start, empty when there is one
+   * @param reason why there is no start; with one, empty or a remark on how it was found
    */
   public record Start(double[] values, double objective, Duration wallTime, int rounds, int zonesUsed,
       String reason) {
