@@ -134,10 +134,10 @@ public final class Planner {
       if (!start.found()) {
         notes.add("no warm start: " + start.reason());
       } else if (scan) {
+        String how = !grouped ? "" : start.reason().isEmpty() ? " with the zones grouped into clusters first"
+            : " (" + start.reason() + ")";
         notes.add(String.format(Locale.ROOT, "warm start: arrival scan%s, objective %.6g found in %.2f s"
-            + " (%d small solves)", !grouped ? "" : start.reason().isEmpty() ? " with the zones grouped into clusters first"
-            : " (" + start.reason() + ")", start.objective(),
-            start.wallTime().toNanos() / 1e9, start.rounds()));
+            + " (%d small solves)", how, start.objective(), start.wallTime().toNanos() / 1e9, start.rounds()));
       } else if (s.fleet()) {
         notes.add(String.format(Locale.ROOT, "warm start: vehicles planned one after another, objective %.6g"
             + " in %.2f s", start.objective(), start.wallTime().toNanos() / 1e9));
