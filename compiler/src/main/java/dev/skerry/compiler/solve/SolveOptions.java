@@ -19,14 +19,21 @@ public final class SolveOptions {
   private final int threads;
   private final double[] warmStart;
   private final CancelToken cancel;
+  private final Duration pointSuffices;
 
   private SolveOptions(
       Duration timeLimit, double relativeGap, int threads, double[] warmStart, CancelToken cancel) {
+    this(timeLimit, relativeGap, threads, warmStart, cancel, null);
+  }
+
+  private SolveOptions(Duration timeLimit, double relativeGap, int threads, double[] warmStart, CancelToken cancel,
+      Duration pointSuffices) {
     this.timeLimit = timeLimit;
     this.relativeGap = relativeGap;
     this.threads = threads;
     this.warmStart = warmStart;
     this.cancel = cancel;
+    this.pointSuffices = pointSuffices;
   }
 
   /** No time limit, the default gap, the backend's threads, no warm start, a fresh cancel token. */
@@ -38,7 +45,7 @@ public final class SolveOptions {
     if (limit != null && (limit.isNegative() || limit.isZero())) {
       throw new IllegalArgumentException("time limit must be positive, got " + limit);
     }
-    return new SolveOptions(limit, relativeGap, threads, warmStart, cancel);
+    return new SolveOptions(limit, relativeGap, threads, warmStart, cancel, pointSuffices);
   }
 
   /** A relative gap {@code |incumbent − bound| / |incumbent|} at which the search may stop. */
@@ -46,7 +53,7 @@ public final class SolveOptions {
     if (!(gap >= 0 && gap < 1)) {
       throw new IllegalArgumentException("relative gap must lie in [0, 1), got " + gap);
     }
-    return new SolveOptions(timeLimit, gap, threads, warmStart, cancel);
+    return new SolveOptions(timeLimit, gap, threads, warmStart, cancel, pointSuffices);
   }
 
   /** Threads the solver may use; 0 leaves the backend's default. */
@@ -54,7 +61,7 @@ public final class SolveOptions {
     if (count < 0) {
       throw new IllegalArgumentException("thread count must not be negative, got " + count);
     }
-    return new SolveOptions(timeLimit, relativeGap, count, warmStart, cancel);
+    return new SolveOptions(timeLimit, relativeGap, count, warmStart, cancel, pointSuffices);
   }
 
   /**
@@ -63,14 +70,28 @@ public final class SolveOptions {
    */
   public SolveOptions withWarmStart(double[] values) {
     return new SolveOptions(
-        timeLimit, relativeGap, threads, values == null ? null : values.clone(), cancel);
+        timeLimit, relativeGap, threads, values == null ? null : values.clone(), cancel, pointSuffices);
   }
 
   public SolveOptions withCancel(CancelToken token) {
     if (token == null) {
       throw new IllegalArgumentException("cancel token must not be null");
     }
-    return new SolveOptions(timeLimit, relativeGap, threads, warmStart, token);
+    return new SolveOptions(timeLimit, relativeGap, threads, warmStart, token, pointSuffices);
+  }
+
+  /**
+   * After {@code after} a feasible point is enough: the search may stop with the best it has, its
+   * proof unfinished (null: search to the gap or the time limit). For a heuristic that needs points
+   * more than proofs. ojAlgo honours it; OR-Tools' backends, which reach the gap quickly, ignore it.
+   */
+  public SolveOptions withPointSufficingAfter(Duration after) {
+    return new SolveOptions(timeLimit, relativeGap, threads, warmStart, cancel, after);
+  }
+
+  /** See {@link #withPointSufficingAfter(Duration)}. */
+  public Optional<Duration> pointSufficesAfter() {
+    return Optional.ofNullable(pointSuffices);
   }
 
   public Optional<Duration> timeLimit() {

@@ -168,6 +168,7 @@ public final class OjAlgoBackend implements SolverBackend {
     options
         .timeLimit()
         .ifPresent(limit -> model.options.time_abort = abortMillis(limit));
+    options.pointSufficesAfter().ifPresent(after -> model.options.time_suffice = Math.max(1, after.toMillis()));
     if (!milp.hasIntegers()) {
       return;
     }
@@ -232,8 +233,14 @@ public final class OjAlgoBackend implements SolverBackend {
           Optimisation.Result r = future.get(POLL.toMillis(), TimeUnit.MILLISECONDS);
           boolean asked =
               stopAskedAt[0] >= 0 || cancel.isCancelled() || reached(options, ticker.elapsed());
+          // a search that may have stopped at its point-suffices time proves nothing either
+          boolean sufficed =
+              options.pointSufficesAfter().map(d -> ticker.elapsed().compareTo(d) >= 0).orElse(false);
           return new Outcome(
-              r, null, asked ? StopReason.ofEarlyStop(options) : StopReason.FINISHED, false);
+              r,
+              null,
+              asked ? StopReason.ofEarlyStop(options) : sufficed ? StopReason.SOLVER_LIMIT : StopReason.FINISHED,
+              false);
         } catch (ExecutionException e) {
           return new Outcome(null, e.getCause(), StopReason.FINISHED, false);
         } catch (InterruptedException e) {

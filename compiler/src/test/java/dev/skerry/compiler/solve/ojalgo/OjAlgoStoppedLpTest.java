@@ -13,6 +13,7 @@ import dev.skerry.compiler.solve.SolveStatus;
 import dev.skerry.compiler.solve.StopReason;
 import dev.skerry.compiler.solve.ortools.Engine;
 import dev.skerry.compiler.solve.ortools.OrToolsBackend;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -94,5 +95,45 @@ class OjAlgoStoppedLpTest {
     assertEquals(SolveStatus.OPTIMAL, r.status(), r::summary);
     assertTrue(m.maxViolation(r.values()) <= 1e-6);
     return r.values();
+  }
+
+  /**
+   * ojAlgo's {@code time_suffice}, which the arrival scan's small solves use. Once that time has
+   * passed with a point in hand, ojAlgo stops at it with the state FEASIBLE (the small harbour,
+   * proven OPTIMAL without it in about 4 s here). But the time also cuts short any LP that runs
+   * longer: with 1 ms the root LP is stopped and ojAlgo answers INFEASIBLE for this feasible model,
+   * the trap of the tests above. Hence the scan gives its solves a quarter of their cap, far more
+   * than one LP of theirs takes, and the backend takes no answer after that time as proof.
+   */
+  @Test
+  void ojAlgoStopsAtAPointOnceItsSufficeTimeHasPassed() {
+    new OjAlgoBackend();
+    Milp m = Lowering.lower(ExampleScenarios.small("harbour_survey"));
+    ExpressionsBasedModel proven = OjAlgoModels.of(m);
+    Optimisation.Result optimum = proven.minimise();
+    assertEquals(Optimisation.State.OPTIMAL, optimum.getState());
+    ExpressionsBasedModel early = OjAlgoModels.of(m);
+    early.options.time_suffice = 500;
+    Optimisation.Result point = early.minimise();
+    assertEquals(Optimisation.State.FEASIBLE, point.getState(), "ojAlgo's answer once a point suffices");
+    assertTrue(point.getValue() >= optimum.getValue() - 1e-6, point + " vs " + optimum);
+    ExpressionsBasedModel cut = OjAlgoModels.of(m);
+    cut.options.time_suffice = 1;
+    assertEquals(Optimisation.State.INFEASIBLE, cut.minimise().getState(), "ojAlgo's answer when the LP is cut");
+  }
+
+  /**
+   * Through the backend: a solve that a point may end is never reported optimal, nor infeasible
+   * (after that time ojAlgo's answers are no proof), and a point it returns satisfies the model.
+   */
+  @Test
+  void aSolveThatAPointMayEndProvesNothing() {
+    Milp m = Lowering.lower(ExampleScenarios.small("harbour_survey"));
+    OjAlgoBackend ojAlgo = new OjAlgoBackend();
+    SolveResult r = ojAlgo.solve(m, SolveOptions.defaults().withPointSufficingAfter(Duration.ofMillis(500)));
+    assertEquals(SolveStatus.FEASIBLE, r.status(), r::summary);
+    assertTrue(m.maxViolation(r.values()) <= 1e-6);
+    SolveResult cut = ojAlgo.solve(m, SolveOptions.defaults().withPointSufficingAfter(Duration.ofMillis(1)));
+    assertEquals(SolveStatus.NO_SOLUTION_FOUND, cut.status(), cut::summary);
   }
 }
