@@ -44,6 +44,16 @@ public final class SolveBench {
   private static final List<String> SOLVERS =
       List.of(System.getProperty("skerry.bench.solvers", "scip,highs,cpsat,ojalgo,cbc").split(","));
 
+  /**
+   * The warm-start settings to run for backends that take one: both by default, or only {@code
+   * -Dskerry.bench.warm=on} (or {@code off}) to halve a long run.
+   */
+  private static final List<Boolean> WARM = switch (System.getProperty("skerry.bench.warm", "both")) {
+    case "on" -> List.of(true);
+    case "off" -> List.of(false);
+    default -> List.of(false, true);
+  };
+
   private SolveBench() {}
 
   public static void main(String[] args) throws Exception {
@@ -63,7 +73,7 @@ public final class SolveBench {
           continue;
         }
         // HiGHS is never hinted and CP-SAT gets no heuristic start (its points are only nearly feasible).
-        for (boolean warm : id.equals("highs") || id.equals("cpsat") ? List.of(false) : List.of(false, true)) {
+        for (boolean warm : id.equals("highs") || id.equals("cpsat") ? List.of(false) : WARM) {
           runs.add(inProcess(planner, name, s, id, warm, cap));
           System.err.println("  " + runs.get(runs.size() - 1));
         }
