@@ -139,14 +139,13 @@ public final class ClusterStarts {
 
   /** The value of each cluster bound column, by column name, for the grouping {@code label}. */
   private static Map<String, Double> boxBounds(ClusterLayout clusters, int[] label) {
-    Bounds[] zone = new Bounds[clusters.zoneCount()];
-    clusters.assignments().forEach(a -> zone[a.zone()] = a.zoneBox());
+    Bounds[] zone = zoneBoxes(clusters);
     Map<String, Double> out = new LinkedHashMap<>();
     for (int l = 0; l < clusters.count(); l++) {
       Bounds b = null;
       for (int o = 0; o < zone.length; o++) {
         if (label[o] == l) {
-          b = b == null ? zone[o] : union(b, zone[o]);
+          b = b == null ? zone[o] : b.union(zone[o]);
         }
       }
       double[] side = b == null
@@ -168,8 +167,7 @@ public final class ClusterStarts {
    */
   static List<int[]> groupings(ClusterLayout clusters, Vec2 start, Vec2 target) {
     int n = clusters.zoneCount();
-    Bounds[] box = new Bounds[n];
-    clusters.assignments().forEach(a -> box[a.zone()] = a.zoneBox());
+    Bounds[] box = zoneBoxes(clusters);
     Vec2 dir = target.minus(start);
     Vec2 u = dir.norm() > 0 ? dir.times(1 / dir.norm()) : new Vec2(1, 0);
     Vec2 normal = new Vec2(-u.y(), u.x());
@@ -243,7 +241,7 @@ public final class ClusterStarts {
   private static boolean blocked(Side l, Side r, Vec2 start, Vec2 target) {
     for (Bounds a : l.boxes) {
       for (Bounds b : r.boxes) {
-        if (a.xmin() < b.xmax() && b.xmin() < a.xmax() && a.ymin() < b.ymax() && b.ymin() < a.ymax()) {
+        if (a.overlapsInterior(b)) {
           return true;
         }
       }
@@ -298,7 +296,7 @@ public final class ClusterStarts {
         Bounds b = null;
         for (int j = i + 1; j <= m; j++) {
           Bounds z = box[zones.get(j - 1)];
-          b = b == null ? z : union(b, z);
+          b = b == null ? z : b.union(z);
           cost[i][j] = across(b, start, normal, d, sign) + AREA_WEIGHT * b.width() * b.height();
         }
       }
@@ -328,7 +326,7 @@ public final class ClusterStarts {
         List<Integer> run = new ArrayList<>(zones.subList(from[g][j], j));
         Bounds b = box[run.get(0)];
         for (int o : run) {
-          b = union(b, box[o]);
+          b = b.union(box[o]);
         }
         groups.add(0, run);
         boxes.add(0, b);
@@ -360,8 +358,10 @@ public final class ClusterStarts {
         new Vec2(b.xmax(), b.ymax())};
   }
 
-  private static Bounds union(Bounds a, Bounds b) {
-    return new Bounds(Math.min(a.xmin(), b.xmin()), Math.min(a.ymin(), b.ymin()), Math.max(a.xmax(), b.xmax()),
-        Math.max(a.ymax(), b.ymax()));
+  /** Each zone's inflated bounding box, by zone index. */
+  private static Bounds[] zoneBoxes(ClusterLayout clusters) {
+    Bounds[] box = new Bounds[clusters.zoneCount()];
+    clusters.assignments().forEach(a -> box[a.zone()] = a.zoneBox());
+    return box;
   }
 }
