@@ -63,12 +63,14 @@ public final class ClusterStarts {
     int solves = 0;
     int tried = 0;
     String failure = "";
+    int found = 0;
     try {
       List<Target> targets = s.candidateTargets(s.vehicle());
       if (targets.size() != 1) {
         return ArrivalScan.find(model, backend, options, budget);
       }
       List<int[]> groupings = groupings(clusters, s.vehicle().start(), targets.get(0).region().bounds().center());
+      found = groupings.size();
       for (int[] label : groupings) {
         Duration left = budget.minus(WarmStarts.since(t0));
         if (best != null || tried == MAX_TRIES || left.compareTo(MIN_TRY) < 0 || options.cancel().isCancelled()) {
@@ -92,7 +94,9 @@ public final class ClusterStarts {
     }
     Duration left = budget.minus(WarmStarts.since(t0));
     WarmStarts.Start plain = ArrivalScan.find(model, backend, options, left.isNegative() ? Duration.ZERO : left);
-    String why = tried + " grouping(s) of the zones into clusters gave no point" + failure;
+    String why = (found == 0 ? "no grouping of the zones into clusters leaves a corridor"
+        : tried == 0 ? "no grouping of the zones into clusters was tried (under " + MIN_TRY.toSeconds() + " s left)"
+        : tried + " grouping(s) of the zones into clusters gave no point") + failure;
     return plain.found()
         ? new WarmStarts.Start(plain.values(), plain.objective(), WarmStarts.since(t0), solves + plain.rounds(),
             plain.zonesUsed(), why + "; the plain scan found this one")
