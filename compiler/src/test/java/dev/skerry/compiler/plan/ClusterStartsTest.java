@@ -6,9 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.skerry.compiler.analysis.ClusterLayout;
+import dev.skerry.compiler.analysis.FormulationLayout;
 import dev.skerry.compiler.lower.Lowering;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.solve.Backends;
 import dev.skerry.compiler.solve.SolveMonitor;
 import dev.skerry.compiler.solve.SolveOptions;
@@ -17,6 +19,8 @@ import dev.skerry.compiler.solve.SolverBackend;
 import dev.skerry.compiler.verify.Verifier;
 import java.time.Duration;
 import java.util.List;
+import java.util.Locale;
+import java.util.Random;
 import java.util.stream.IntStream;
 import org.junit.jupiter.api.Test;
 
@@ -137,5 +141,41 @@ class ClusterStartsTest {
     assertTrue(r.verified(), () -> String.valueOf(r.verify()));
     assertTrue(r.solve().warnings().stream().anyMatch(w -> w.contains("grouped into clusters first")),
         r.solve().warnings()::toString);
+  }
+
+  /** {@code n} small rocks, seeded, between a start at the west edge and a target at the east. */
+  static Scenario manyRocks(int n) {
+    Random random = new Random(7);
+    StringBuilder text = new StringBuilder("""
+        vehicle v { start (1, 50) at rest speed max 5 m/s accel max 2 m/s^2 radius 0.2 m }
+        area a box (0, 0) to (1000, 100)
+        """);
+    for (int i = 0; i < n; i++) {
+      double x = 10 + random.nextDouble() * 980;
+      double y = random.nextDouble() * 98;
+      text.append(String.format(Locale.ROOT, "zone z%d box (%.2f, %.2f) to (%.2f, %.2f)%n", i, x, y,
+          x + 0.5, y + 0.5));
+    }
+    text.append("target t point (999, 50) within 1 m at rest\n");
+    text.append("plan { step 2 s horizon 120 minimize time clusters 3 ordered }\n");
+    return ExampleScenarios.parse("many_rocks", text.toString());
+  }
+
+  /**
+   * Large models: with more corridor offsets than {@link ClusterStarts#MAX_CUTS} the groupings still
+   * come out numbered as the rule wants; past {@link ClusterStarts#MAX_ZONES} zones there are none
+   * (the plain scan runs), so the grouping never eats the scan's budget.
+   */
+  @Test
+  void largeModelsAreGroupedWithinBoundsOrNotAtAll() {
+    Scenario some = manyRocks(200);
+    ClusterLayout cl = FormulationLayout.of(some).clusters();
+    Vec2 target = some.target().region().bounds().center();
+    List<int[]> groupings = ClusterStarts.groupings(cl, some.vehicle().start(), target);
+    assertFalse(groupings.isEmpty());
+    groupings.forEach(label -> assertOrderedLabels(cl, label));
+    Scenario many = manyRocks(ClusterStarts.MAX_ZONES + 1);
+    ClusterLayout big = FormulationLayout.of(many).clusters();
+    assertTrue(ClusterStarts.groupings(big, many.vehicle().start(), target).isEmpty());
   }
 }
