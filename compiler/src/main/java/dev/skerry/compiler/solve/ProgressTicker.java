@@ -47,6 +47,11 @@ public final class ProgressTicker implements AutoCloseable {
     submit(this::emit);
   }
 
+  /** Whether a backend has recorded an incumbent. */
+  public boolean hasIncumbent() {
+    return !Double.isNaN(incumbent);
+  }
+
   /** Records a new best bound; it goes out with the next tick. */
   public void bound(double value) {
     bound = value;

@@ -83,7 +83,8 @@ public final class SolveOptions {
   /**
    * After {@code after} a feasible point is enough: the search may stop with the best it has, its
    * proof unfinished (null: search to the gap or the time limit). For a heuristic that needs points
-   * more than proofs. ojAlgo honours it; OR-Tools' backends, which reach the gap quickly, ignore it.
+   * more than proofs. The ojAlgo backend stops its search once the time has passed and it has a point
+   * (a search with none goes on); OR-Tools' backends, which reach the gap quickly, ignore it.
    */
   public SolveOptions withPointSufficingAfter(Duration after) {
     return new SolveOptions(timeLimit, relativeGap, threads, warmStart, cancel, after);

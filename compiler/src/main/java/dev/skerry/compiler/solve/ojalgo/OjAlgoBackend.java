@@ -168,7 +168,6 @@ public final class OjAlgoBackend implements SolverBackend {
     options
         .timeLimit()
         .ifPresent(limit -> model.options.time_abort = abortMillis(limit));
-    options.pointSufficesAfter().ifPresent(after -> model.options.time_suffice = Math.max(1, after.toMillis()));
     if (!milp.hasIntegers()) {
       return;
     }
@@ -226,6 +225,11 @@ public final class OjAlgoBackend implements SolverBackend {
     worker.setDaemon(true);
     CancelToken cancel = options.cancel();
     long[] stopAskedAt = {-1};
+    // a point suffices: stopped by this class once the time has passed and ojAlgo has an incumbent
+    // (ojAlgo's own time_suffice also cuts short the node LPs of a search that has none yet, which
+    // then ends INFEASIBLE: OjAlgoStoppedLpTest)
+    boolean[] sufficed = {false};
+    boolean started = options.warmStart().isPresent();
     try (CancelToken.Registration ignored = cancel.onCancel(() -> model.options.time_abort = 0)) {
       worker.start();
       while (true) {
@@ -233,14 +237,7 @@ public final class OjAlgoBackend implements SolverBackend {
           Optimisation.Result r = future.get(POLL.toMillis(), TimeUnit.MILLISECONDS);
           boolean asked =
               stopAskedAt[0] >= 0 || cancel.isCancelled() || reached(options, ticker.elapsed());
-          // a search that may have stopped at its point-suffices time proves nothing either
-          boolean sufficed =
-              options.pointSufficesAfter().map(d -> ticker.elapsed().compareTo(d) >= 0).orElse(false);
-          return new Outcome(
-              r,
-              null,
-              asked ? StopReason.ofEarlyStop(options) : sufficed ? StopReason.SOLVER_LIMIT : StopReason.FINISHED,
-              false);
+          return new Outcome(r, null, asked ? stopReason(options, sufficed[0]) : StopReason.FINISHED, false);
         } catch (ExecutionException e) {
           return new Outcome(null, e.getCause(), StopReason.FINISHED, false);
         } catch (InterruptedException e) {
@@ -248,20 +245,25 @@ public final class OjAlgoBackend implements SolverBackend {
           cancel.cancel();
         } catch (TimeoutException stillRunning) {
           Duration elapsed = ticker.elapsed();
-          if ((reached(options, elapsed) || cancel.isCancelled()) && stopAskedAt[0] < 0) {
+          boolean enough = (ticker.hasIncumbent() || started)
+              && options.pointSufficesAfter().map(d -> elapsed.compareTo(d) >= 0).orElse(false);
+          if ((reached(options, elapsed) || cancel.isCancelled() || enough) && stopAskedAt[0] < 0) {
+            sufficed[0] = enough && !reached(options, elapsed) && !cancel.isCancelled();
             model.options.time_abort = 0;
             stopAskedAt[0] = elapsed.toNanos();
           }
           if (stopAskedAt[0] >= 0 && elapsed.toNanos() - stopAskedAt[0] > GRACE.toNanos()) {
-            return new Outcome(
-                null,
-                null,
-                cancel.isCancelled() ? StopReason.CANCELLED : StopReason.TIME_LIMIT,
-                true);
+            return new Outcome(null, null, cancel.isCancelled() ? StopReason.CANCELLED
+                : sufficed[0] ? StopReason.SOLVER_LIMIT : StopReason.TIME_LIMIT, true);
           }
         }
       }
     }
+  }
+
+  /** Why a search this class stopped ended: its point sufficed, or the limit or a cancel. */
+  private static StopReason stopReason(SolveOptions options, boolean sufficed) {
+    return sufficed && !options.cancel().isCancelled() ? StopReason.SOLVER_LIMIT : StopReason.ofEarlyStop(options);
   }
 
   /**
