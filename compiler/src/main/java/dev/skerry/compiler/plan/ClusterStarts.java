@@ -6,6 +6,7 @@ import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.PlanOptions.SymmetryRule;
 import dev.skerry.compiler.model.Scenario;
+import dev.skerry.compiler.model.Shape;
 import dev.skerry.compiler.model.Target;
 import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.solve.SolveOptions;
@@ -77,8 +78,11 @@ public final class ClusterStarts {
           break;
         }
         tried++;
-        WarmStarts.Start r = ArrivalScan.find(fixed(model, clusters, label), backend, options,
-            left.multipliedBy(3).dividedBy(4), WINDOWS);
+        Milp grouped = fixed(model, clusters, label);
+        // the shortest path round this grouping's boxes gives each slot its side of every box
+        GuidePath guide = GuidePath.of(s, grouped, boxes(clusters, label)).orElse(null);
+        WarmStarts.Start r = ArrivalScan.find(grouped, backend, options, left.multipliedBy(3).dividedBy(4),
+            guide == null ? WINDOWS : ArrivalScan.GUIDED, guide);
         solves += r.rounds();
         if (r.found() && model.maxViolation(r.values()) <= WarmStarts.TOLERANCE) {
           best = r;
@@ -140,6 +144,24 @@ public final class ClusterStarts {
       vars.add(value == null ? v : new Variable(v.index(), v.name(), v.type(), value, value, v.origin()));
     }
     return new Milp(model.name(), vars, model.rows(), model.objective());
+  }
+
+  /** The boxes of the grouping {@code label}, each the union of its zones' inflated boxes. */
+  private static List<Shape> boxes(ClusterLayout clusters, int[] label) {
+    Bounds[] zone = zoneBoxes(clusters);
+    List<Shape> out = new ArrayList<>();
+    for (int l = 0; l < clusters.count(); l++) {
+      Bounds b = null;
+      for (int o = 0; o < zone.length; o++) {
+        if (label[o] == l) {
+          b = b == null ? zone[o] : b.union(zone[o]);
+        }
+      }
+      if (b != null) {
+        out.add(new Shape.Box(b));
+      }
+    }
+    return out;
   }
 
   /** The value of each cluster bound column, by column name, for the grouping {@code label}. */

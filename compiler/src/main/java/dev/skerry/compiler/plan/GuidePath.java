@@ -103,7 +103,8 @@ final class GuidePath {
       }
     }
     Graph g = new Graph(s, v, grown);
-    List<Waypoint> wps = s.waypoints();
+    // in a fleet any vehicle may pass a waypoint: the guide leaves them to the MILP
+    List<Waypoint> wps = s.fleet() ? List.of() : s.waypoints();
     List<Vec2> route = null;
     List<Integer> order = null;
     double[] wpArc = new double[wps.size()];
@@ -187,6 +188,11 @@ final class GuidePath {
       }
     }
     return points.get(points.size() - 1);
+  }
+
+  /** Whether the guide passes the waypoint {@code name} (and so fixes its visit). */
+  boolean passes(String name) {
+    return waypointNames.contains(name);
   }
 
   /** The vehicle the guide is for, as the model's columns name it (empty for a lone vehicle). */

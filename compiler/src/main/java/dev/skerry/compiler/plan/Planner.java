@@ -128,7 +128,7 @@ public final class Planner {
       boolean grouped = scan && ClusterStarts.applies(s, lowered.layout().clusters(), milp);
       WarmStarts.Start start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
           : grouped ? ClusterStarts.find(s, lowered.layout().clusters(), milp, backend, options, scanBudget(options))
-          : scan ? ArrivalScan.find(milp, backend, options, scanBudget(options))
+          : scan ? ArrivalScan.find(s, milp, backend, options, scanBudget(options))
           : WarmStarts.find(milp, backend, options, WARM_START_CAP);
       run = lessTime(start.found() ? options.withWarmStart(start.values()) : run, options, start);
       if (!start.found()) {
