@@ -25,12 +25,12 @@ import org.junit.jupiter.params.provider.MethodSource;
  * Every example solved end to end, by each in-process backend, against {@code cbc} 2.10 (Debian
  * coinor-cbc, -preprocess off) reading our exported free MPS as the outside judge. SCIP solves
  * every full example (seconds each; cbc and glpsol judge the full examples in {@code
- * ExampleCrossCheckTest}); in-process CBC and ojAlgo solve versions derived from each example
- * ({@link ExampleScenarios}): in-process CBC needed 28 s for the full warehouse and 54 s for the
- * twin skiffs and did not prove the harbour or the rock field within 60 s, and ojAlgo proves none of
- * the full 2-D examples within 60 s (it returns verified plans for them, 0–5.6 % above the optimum;
- * the 3-D ridge it proves in 41–57 s with its start), so with them the default suite would
- * outgrow its budget. Their full-size timings are in BENCHMARKS.md. Two objectives agree when they
+ * ExampleCrossCheckTest}) and ojAlgo comes within the plan's gap of it on every full example
+ * but the fleet (below); in-process CBC and ojAlgo also solve versions derived from each example
+ * ({@link ExampleScenarios}) to a proof: in-process CBC needed 28 s for the full warehouse and 54 s
+ * for the twin skiffs and did not prove the harbour or the rock field within 60 s, and ojAlgo proves
+ * none of the full 2-D examples within 60 s (the 3-D ridge in 41–57 s), so with them the default
+ * suite would outgrow its budget. Their full-size timings are in BENCHMARKS.md. Two objectives agree when they
  * differ by at most the plan's relative gap (both solvers stop within it of the optimum).
  */
 class ExampleSolveTest {
@@ -70,6 +70,46 @@ class ExampleSolveTest {
   @MethodSource("names")
   void everyExampleSolvesWithScipAndTheVerifierAcceptsIt(String name) {
     assertSolvedAndVerified(plan(ExampleScenarios.full(name), "scip"));
+  }
+
+  /** ojAlgo's time on each full example here: its start comes in seconds, its proof does not. */
+  static final Duration OJALGO_FULL = Duration.ofSeconds(20);
+
+  /**
+   * ojAlgo's time on the fleet: its rounds plan one skiff after the other, each in a share of three
+   * quarters of the limit (at 20 s the second skiff's round found only a plan 3.7 % above the
+   * optimum, at 40 s 0.13 % above it in each of two runs).
+   */
+  static final Duration OJALGO_FLEET = Duration.ofSeconds(40);
+
+  /**
+   * ojAlgo on every full example, 20 s each (the fleet 40 s): a plan the verifier accepts, within the plan's gap of
+   * SCIP's optimum of the same model (which {@code ExampleCrossCheckTest} checks against cbc 2.10 on
+   * our free MPS file and glpsol 5.0 on our LP file), except the twin skiffs. ojAlgo proves none of
+   * the 2-D ones in that time; its plans come from the arrival scan's start (the shortest path round
+   * the zones for its sides, {@link GuidePath}). The twin skiffs' plan has the default gap of 1e-6,
+   * and ojAlgo's best there, planning the skiffs one after another and each again round the other,
+   * is 0.13 % above SCIP's (measured 59.707 against 59.631): that one is checked within 1 % only.
+   */
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("names")
+  void ojAlgoComesWithinTheGapOfScipOnTheFullExample(String name) {
+    Scenario s = ExampleScenarios.full(name);
+    PlanResult scip = plan(s, "scip");
+    assertSolvedAndVerified(scip);
+    SolveOptions o = Planner.optionsOf(s.plan()).withTimeLimit(s.fleet() ? OJALGO_FLEET : OJALGO_FULL);
+    PlanResult ojalgo = PLANNER.plan(s, "ojalgo", o, SolveMonitor.NONE);
+    System.out.println(s.name() + " ojalgo: " + ojalgo.solve().summary() + " " + ojalgo.solve().warnings());
+    assertTrue(ojalgo.solve().status().hasSolution(), ojalgo.solve()::summary);
+    assertTrue(ojalgo.verified(), () -> String.valueOf(ojalgo.verify()));
+    double x = scip.solve().objective();
+    double y = ojalgo.solve().objective();
+    assertTrue(y >= x - 1e-6 * Math.abs(x) - 1e-6, () -> "ojAlgo " + y + " below SCIP's optimum " + x);
+    if (s.fleet()) {
+      assertTrue(y <= x * 1.01, () -> "ojAlgo " + y + ", SCIP " + x);
+    } else {
+      assertAgree(s, scip, ojalgo);
+    }
   }
 
   @ParameterizedTest(name = "{0}")
