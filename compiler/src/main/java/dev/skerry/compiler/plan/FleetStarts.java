@@ -24,7 +24,10 @@ import java.util.Set;
  * of the earlier vehicles' fixed paths and take a target they left: by the zone-by-zone heuristic of
  * {@link WarmStarts} (the earlier vehicles' rows are fixed data, so its restricted models hold one
  * vehicle's nearby zones), else by solving the round's model. Each round gets an equal share of
- * the time limit (one share is left for the solve proper) and costs about one vehicle alone. The last round's model is the full model
+ * the time limit (one share is left for the solve proper) and costs about one vehicle alone; for a
+ * slow backend (the arrival scan) the rounds share the scan's budget, a round's unused time passing
+ * on to the next, and time left after the last goes to planning each vehicle again round the
+ * others ({@link #improve}). The last round's model is the full model
  * with all but the last vehicle fixed: its solution is a point of the full model, handed back only
  * when the full model accepts it. An earlier vehicle's fixed path may leave a later one no way
  * through; then there is no start and the reason says which round failed.
@@ -51,6 +54,14 @@ public final class FleetStarts {
       for (int i = 1; i <= n; i++) {
         if (options.cancel().isCancelled()) {
           return none(t0, i - 1, "cancelled");
+        }
+        if (slow) {
+          // what an earlier round left unused passes on: the first skiff of the twin skiffs takes
+          // 0.6 s of its half, and the second, which must find its way round the first, then has
+          // caps twice as long for its small solves
+          Duration unused = Planner.scanBudget(options).minus(WarmStarts.since(t0));
+          perRound = unused.isNegative() ? Duration.ofMillis(1) : unused.dividedBy(n - i + 1);
+          sub = sub.withTimeLimit(perRound);
         }
         Milp round = round(s, i, previous, values, fixed, slow);
         // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
