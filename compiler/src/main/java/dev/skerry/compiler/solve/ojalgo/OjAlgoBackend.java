@@ -228,7 +228,7 @@ public final class OjAlgoBackend implements SolverBackend {
     // a point suffices: stopped by this class once the time has passed and ojAlgo has an incumbent
     // (ojAlgo's own time_suffice also cuts short the node LPs of a search that has none yet, which
     // then ends INFEASIBLE: OjAlgoStoppedLpTest)
-    boolean[] sufficed = {false};
+    boolean sufficed = false;
     boolean started = options.warmStart().isPresent();
     try (CancelToken.Registration ignored = cancel.onCancel(() -> model.options.time_abort = 0)) {
       worker.start();
@@ -237,7 +237,7 @@ public final class OjAlgoBackend implements SolverBackend {
           Optimisation.Result r = future.get(POLL.toMillis(), TimeUnit.MILLISECONDS);
           boolean asked =
               stopAskedAt[0] >= 0 || cancel.isCancelled() || reached(options, ticker.elapsed());
-          return new Outcome(r, null, asked ? stopReason(options, sufficed[0]) : StopReason.FINISHED, false);
+          return new Outcome(r, null, asked ? stopReason(options, sufficed) : StopReason.FINISHED, false);
         } catch (ExecutionException e) {
           return new Outcome(null, e.getCause(), StopReason.FINISHED, false);
         } catch (InterruptedException e) {
@@ -248,13 +248,13 @@ public final class OjAlgoBackend implements SolverBackend {
           boolean enough = (ticker.hasIncumbent() || started)
               && options.pointSufficesAfter().map(d -> elapsed.compareTo(d) >= 0).orElse(false);
           if ((reached(options, elapsed) || cancel.isCancelled() || enough) && stopAskedAt[0] < 0) {
-            sufficed[0] = enough && !reached(options, elapsed) && !cancel.isCancelled();
+            sufficed = enough && !reached(options, elapsed) && !cancel.isCancelled();
             model.options.time_abort = 0;
             stopAskedAt[0] = elapsed.toNanos();
           }
           if (stopAskedAt[0] >= 0 && elapsed.toNanos() - stopAskedAt[0] > GRACE.toNanos()) {
             return new Outcome(null, null, cancel.isCancelled() ? StopReason.CANCELLED
-                : sufficed[0] ? StopReason.SOLVER_LIMIT : StopReason.TIME_LIMIT, true);
+                : sufficed ? StopReason.SOLVER_LIMIT : StopReason.TIME_LIMIT, true);
           }
         }
       }
