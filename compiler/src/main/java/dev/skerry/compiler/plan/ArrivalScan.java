@@ -130,7 +130,12 @@ public final class ArrivalScan {
    */
   public static WarmStarts.Start find(Scenario s, Milp model, SolverBackend backend, SolveOptions options,
       Duration budget) {
-    GuidePath guide = GuidePath.of(s, model).orElse(null);
+    GuidePath guide;
+    try {
+      guide = GuidePath.of(s, model).orElse(null);
+    } catch (RuntimeException e) {
+      guide = null; // a start is a help, never a reason to fail: the unguided scan
+    }
     return guide == null ? find(model, backend, options, budget)
         : find(model, backend, options, budget, GUIDED, guide);
   }

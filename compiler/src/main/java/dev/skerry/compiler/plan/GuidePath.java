@@ -38,6 +38,13 @@ final class GuidePath {
   /** Corners are pushed this far out of their zone, so that a path round them does not touch it. */
   static final double CLEARANCE = 1e-3;
 
+  /**
+   * No guide past this many corners: the visibility graph tests every pair of corners against every
+   * zone, so its cost grows with the cube of the zone count (600 corners, 150 boxes: about 27
+   * million segment tests; the rock field's 40 rocks have 160).
+   */
+  static final int MAX_CORNERS = 600;
+
   /** Waypoint orders tried in full up to this many waypoints; above, nearest first. */
   static final int ALL_ORDERS_UP_TO = 6;
 
@@ -101,6 +108,10 @@ final class GuidePath {
       for (Zone z : s.zones()) {
         grown.add(z.shape().inflate(v.radius()));
       }
+    }
+    int corners = grown.stream().mapToInt(z -> z.corners().size()).sum();
+    if (corners > MAX_CORNERS) {
+      return Optional.empty();
     }
     Graph g = new Graph(s, v, grown);
     // in a fleet any vehicle may pass a waypoint: the guide leaves them to the MILP

@@ -101,6 +101,21 @@ class GuidePathTest {
     assertTrue(start.objective() <= optimal + 1 + 1e-9, () -> start.objective() + " vs " + optimal);
   }
 
+  /** Past its corner budget there is no guide (the scan runs unguided), rather than a slow one. */
+  @Test
+  void manyZonesGiveNoGuide() {
+    List<dev.skerry.compiler.model.Zone> rocks = new java.util.ArrayList<>();
+    for (int i = 0; i < 160; i++) {
+      double x = 10 + (i % 16) * 5;
+      double y = 10 + (i / 16) * 5;
+      rocks.add(zone("rock" + i, box(x, y, x + 1, y + 1)));
+    }
+    Scenario s = scenario(vehicle(new Vec2(1, 1), 2, 1, 0.2, 8), box(0, 0, 100, 70), rocks,
+        target(box(95, 65, 96, 66), true), List.of(), plan(1.0, 10, 1, 0));
+    assertTrue(160 * 4 > GuidePath.MAX_CORNERS);
+    assertTrue(GuidePath.of(s, Lowering.lower(s)).isEmpty());
+  }
+
   private static double length(List<Vec2> p) {
     double sum = 0;
     for (int i = 1; i < p.size(); i++) {
