@@ -290,6 +290,8 @@ final class GuidePath {
     private final Scenario scenario;
     private final Vehicle vehicle;
     private final List<Shape> zones;
+    private final List<Bounds> boxes = new ArrayList<>();
+    private final List<List<Shape.Face>> faces = new ArrayList<>();
     private final List<Vec2> corners = new ArrayList<>();
     private final double[][] between;
 
@@ -297,6 +299,10 @@ final class GuidePath {
       this.scenario = s;
       this.vehicle = v;
       this.zones = zones;
+      for (Shape z : zones) {
+        boxes.add(z.bounds());
+        faces.add(z.faces());
+      }
       for (Shape z : zones) {
         List<Vec2> cs = z.corners();
         Vec2 centre = z.bounds().center();
@@ -385,45 +391,64 @@ final class GuidePath {
       });
     }
 
-    /** Dijkstra from a to b over the corners (a dense graph: a few hundred nodes at most here). */
+    /** Shortest distances from a point over the corners, and each corner's predecessor (-1: the point). */
+    private record Tree(double[] dist, int[] prev) {}
+
+    private final Map<Vec2, double[]> sight = new HashMap<>();
+    private final Map<Vec2, Tree> trees = new HashMap<>();
+
+    /** The distance from {@code p} to each corner it sees, infinite to the others (kept per point). */
+    private double[] sight(Vec2 p) {
+      return sight.computeIfAbsent(p, q -> {
+        double[] d = new double[corners.size()];
+        for (int i = 0; i < d.length; i++) {
+          d[i] = clear(q, corners.get(i)) ? q.distanceTo(corners.get(i)) : Double.POSITIVE_INFINITY;
+        }
+        return d;
+      });
+    }
+
+    /** Dijkstra from {@code a} over the corners (a dense graph of at most {@link #MAX_CORNERS} nodes). */
+    private Tree tree(Vec2 a) {
+      return trees.computeIfAbsent(a, q -> {
+        int n = corners.size();
+        double[] dist = sight(q).clone();
+        int[] prev = new int[n];
+        boolean[] done = new boolean[n];
+        Arrays.fill(prev, -1);
+        while (true) {
+          int u = -1;
+          for (int i = 0; i < n; i++) {
+            if (!done[i] && dist[i] < Double.POSITIVE_INFINITY && (u < 0 || dist[i] < dist[u])) {
+              u = i;
+            }
+          }
+          if (u < 0) {
+            return new Tree(dist, prev);
+          }
+          done[u] = true;
+          for (int w = 0; w < n; w++) {
+            if (!done[w] && dist[u] + between[u][w] < dist[w]) {
+              dist[w] = dist[u] + between[u][w];
+              prev[w] = u;
+            }
+          }
+        }
+      });
+    }
+
+    /** The shortest path from a to b round the zones, or null if there is none. */
     private List<Vec2> shortest(Vec2 a, Vec2 b) {
       if (clear(a, b)) {
         return List.of(a, b);
       }
-      int n = corners.size();
-      double[] dist = new double[n];
-      int[] prev = new int[n];
-      boolean[] done = new boolean[n];
-      Arrays.fill(prev, -1);
-      for (int i = 0; i < n; i++) {
-        dist[i] = clear(a, corners.get(i)) ? a.distanceTo(corners.get(i)) : Double.POSITIVE_INFINITY;
-      }
-      double best = Double.POSITIVE_INFINITY;
+      Tree t = tree(a);
+      double[] toB = sight(b);
       int last = -1;
-      double[] toB = new double[n];
-      for (int i = 0; i < n; i++) {
-        toB[i] = clear(corners.get(i), b) ? corners.get(i).distanceTo(b) : Double.POSITIVE_INFINITY;
-      }
-      while (true) {
-        int u = -1;
-        for (int i = 0; i < n; i++) {
-          if (!done[i] && dist[i] < Double.POSITIVE_INFINITY && (u < 0 || dist[i] < dist[u])) {
-            u = i;
-          }
-        }
-        if (u < 0 || dist[u] >= best) {
-          break;
-        }
-        done[u] = true;
-        if (dist[u] + toB[u] < best) {
-          best = dist[u] + toB[u];
+      for (int u = 0; u < toB.length; u++) {
+        if (t.dist()[u] + toB[u] < Double.POSITIVE_INFINITY
+            && (last < 0 || t.dist()[u] + toB[u] < t.dist()[last] + toB[last])) {
           last = u;
-        }
-        for (int w = 0; w < n; w++) {
-          if (!done[w] && dist[u] + between[u][w] < dist[w]) {
-            dist[w] = dist[u] + between[u][w];
-            prev[w] = u;
-          }
         }
       }
       if (last < 0) {
@@ -431,7 +456,7 @@ final class GuidePath {
       }
       List<Vec2> path = new ArrayList<>();
       path.add(b);
-      for (int u = last; u >= 0; u = prev[u]) {
+      for (int u = last; u >= 0; u = t.prev()[u]) {
         path.add(corners.get(u));
       }
       path.add(a);
@@ -439,10 +464,21 @@ final class GuidePath {
       return path;
     }
 
-    /** Whether the segment a→b stays out of every grown zone's open interior. */
+    /**
+     * Whether the segment a→b stays out of every grown zone's open interior (zones whose box the
+     * segment's box misses are skipped; each zone's faces are read once).
+     */
     private boolean clear(Vec2 a, Vec2 b) {
-      for (Shape z : zones) {
-        if (crossesInterior(a, b, z)) {
+      double xlo = Math.min(a.x(), b.x());
+      double xhi = Math.max(a.x(), b.x());
+      double ylo = Math.min(a.y(), b.y());
+      double yhi = Math.max(a.y(), b.y());
+      for (int i = 0; i < zones.size(); i++) {
+        Bounds z = boxes.get(i);
+        if (xhi <= z.xmin() || xlo >= z.xmax() || yhi <= z.ymin() || ylo >= z.ymax()) {
+          continue;
+        }
+        if (crossesInterior(a, b, faces.get(i))) {
           return false;
         }
       }
@@ -466,11 +502,15 @@ final class GuidePath {
    * margin far below the clearance so that a segment along a face or through a corner is clear.
    */
   static boolean crossesInterior(Vec2 a, Vec2 b, Shape shape) {
+    return crossesInterior(a, b, shape.faces());
+  }
+
+  private static boolean crossesInterior(Vec2 a, Vec2 b, List<Shape.Face> faces) {
     double enter = 0;
     double leave = 1;
     Vec2 d = b.minus(a);
     double tol = CLEARANCE * 1e-3;
-    for (Shape.Face f : shape.faces()) {
+    for (Shape.Face f : faces) {
       double slack = f.offset() - tol - f.normal().dot(a);
       double rate = f.normal().dot(d);
       if (Math.abs(rate) < 1e-15) {
