@@ -2,6 +2,7 @@ package dev.skerry.compiler.plan;
 
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.Variable;
+import dev.skerry.compiler.model.Bounds;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.model.Shape;
 import dev.skerry.compiler.model.Target;
@@ -9,12 +10,12 @@ import dev.skerry.compiler.model.Vec2;
 import dev.skerry.compiler.model.Vehicle;
 import dev.skerry.compiler.model.Waypoint;
 import dev.skerry.compiler.model.Zone;
-import dev.skerry.compiler.model.Bounds;
 import java.util.ArrayList;
-import java.util.HashMap;
-import java.util.Map;
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -120,7 +121,7 @@ final class GuidePath {
     List<Integer> order = null;
     double[] wpArc = new double[wps.size()];
     double shortest = Double.POSITIVE_INFINITY;
-    for (List<Integer> o : orders(v.start(), wps, target.region().bounds().center())) {
+    for (List<Integer> o : orders(v.start(), wps)) {
       List<List<Vec2>> stops = new ArrayList<>();
       stops.add(List.of(v.start()));
       o.forEach(i -> stops.add(candidates(wps.get(i).region().center(), corners(wps.get(i).region()))));
@@ -245,7 +246,7 @@ final class GuidePath {
   }
 
   /** Waypoint orders to try: every one for a few waypoints, else the nearest next each time. */
-  private static List<List<Integer>> orders(Vec2 start, List<Waypoint> wps, Vec2 goal) {
+  private static List<List<Integer>> orders(Vec2 start, List<Waypoint> wps) {
     List<List<Integer>> out = new ArrayList<>();
     if (wps.size() <= ALL_ORDERS_UP_TO) {
       permute(new ArrayList<>(), new boolean[wps.size()], out);
@@ -460,7 +461,7 @@ final class GuidePath {
         path.add(corners.get(u));
       }
       path.add(a);
-      java.util.Collections.reverse(path);
+      Collections.reverse(path);
       return path;
     }
 
