@@ -270,11 +270,7 @@ public final class ArrivalScan {
           visits.add(v.index());
         }
       }
-      for (Row r : model.rows()) {
-        if (r.origin().role().equals("cover")) {
-          active.add(r.origin().entity());
-        }
-      }
+      active.addAll(coveredZones(model));
       everBroken.putAll(turns(model, last, guide.owner()));
       fixSides(model, active, everBroken, last, fixed, window);
     }
@@ -398,13 +394,7 @@ public final class ArrivalScan {
         fixed.put(v.index(), x[v.index()] > 0.5 ? 1.0 : 0.0);
       }
     }
-    Set<String> active = new TreeSet<>();
-    for (Row r : model.rows()) {
-      if (r.origin().role().equals("cover")) {
-        active.add(r.origin().entity());
-      }
-    }
-    fixSides(model, active, turns(model, x, owner), x, fixed, window);
+    fixSides(model, coveredZones(model), turns(model, x, owner), x, fixed, window);
     SolveResult r = backend.solve(withBounds(model, fixed), options.withWarmStart(x));
     if (!r.status().hasSolution() || !(model.maxViolation(r.values()) <= WarmStarts.TOLERANCE)) {
       return null;
@@ -412,6 +402,17 @@ public final class ArrivalScan {
     boolean better = model.objective().minimize() ? model.objective().value(r.values()) < model.objective().value(x)
         : model.objective().value(r.values()) > model.objective().value(x);
     return better ? r.values() : null;
+  }
+
+  /** Every zone (or cluster) with a cover row in the model. */
+  private static Set<String> coveredZones(Milp model) {
+    Set<String> zones = new TreeSet<>();
+    for (Row r : model.rows()) {
+      if (r.origin().role().equals("cover")) {
+        zones.add(r.origin().entity());
+      }
+    }
+    return zones;
   }
 
   /** The guide's fastest step is scaled by this for the first step tried. */

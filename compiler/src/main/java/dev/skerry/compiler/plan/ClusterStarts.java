@@ -148,15 +148,8 @@ public final class ClusterStarts {
 
   /** The boxes of the grouping {@code label}, each the union of its zones' inflated boxes. */
   private static List<Shape> boxes(ClusterLayout clusters, int[] label) {
-    Bounds[] zone = zoneBoxes(clusters);
     List<Shape> out = new ArrayList<>();
-    for (int l = 0; l < clusters.count(); l++) {
-      Bounds b = null;
-      for (int o = 0; o < zone.length; o++) {
-        if (label[o] == l) {
-          b = b == null ? zone[o] : b.union(zone[o]);
-        }
-      }
+    for (Bounds b : groupBoxes(clusters, label)) {
       if (b != null) {
         out.add(new Shape.Box(b));
       }
@@ -164,17 +157,23 @@ public final class ClusterStarts {
     return out;
   }
 
+  /** Cluster l's box under the grouping {@code label} at [l]: the union of its zones' boxes, null if it has none. */
+  private static Bounds[] groupBoxes(ClusterLayout clusters, int[] label) {
+    Bounds[] zone = zoneBoxes(clusters);
+    Bounds[] out = new Bounds[clusters.count()];
+    for (int o = 0; o < zone.length; o++) {
+      int l = label[o];
+      out[l] = out[l] == null ? zone[o] : out[l].union(zone[o]);
+    }
+    return out;
+  }
+
   /** The value of each cluster bound column, by column name, for the grouping {@code label}. */
   private static Map<String, Double> boxBounds(ClusterLayout clusters, int[] label) {
-    Bounds[] zone = zoneBoxes(clusters);
+    Bounds[] group = groupBoxes(clusters, label);
     Map<String, Double> out = new LinkedHashMap<>();
     for (int l = 0; l < clusters.count(); l++) {
-      Bounds b = null;
-      for (int o = 0; o < zone.length; o++) {
-        if (label[o] == l) {
-          b = b == null ? zone[o] : b.union(zone[o]);
-        }
-      }
+      Bounds b = group[l];
       double[] side = b == null
           ? new double[] {clusters.sides().get(ClusterLayout.XMIN).hi(), clusters.sides().get(ClusterLayout.XMAX).lo(),
               clusters.sides().get(ClusterLayout.YMIN).hi(), clusters.sides().get(ClusterLayout.YMAX).lo()}

@@ -134,31 +134,27 @@ public final class FleetStarts {
         if (left.isNegative() || left.isZero() || sub.cancel().isCancelled()) {
           return new Improved(best, solves);
         }
-        Set<String> others = new HashSet<>();
-        s.vehicles().stream().filter(o -> o != v).forEach(o -> others.add(o.name()));
-        Milp held = toItsTarget(fix(model, model, best, others, true), best, v.name());
+        Milp held = heldRoundOthers(s, model, best, v);
         if (!ArrivalScan.applies(held)) {
           continue;
         }
         // a fresh scan round the others, then the route kept with its turns free to move
         WarmStarts.Start again = ArrivalScan.find(s, held, backend, sub.withTimeLimit(left), left.dividedBy(2));
         solves += again.rounds();
-        if (again.found() && model.maxViolation(again.values()) <= WarmStarts.TOLERANCE
-            && model.objective().value(again.values()) < cost - IMPROVEMENT * Math.max(1, Math.abs(cost))) {
+        if (again.found() && lowers(model, again.values(), cost)) {
           best = again.values();
           cost = model.objective().value(best);
           better = true;
+          held = heldRoundOthers(s, model, best, v);
         }
         left = budget.minus(WarmStarts.since(t0));
         if (left.isNegative() || left.isZero()) {
           return new Improved(best, solves);
         }
-        held = toItsTarget(fix(model, model, best, others, true), best, v.name());
         double[] near = ArrivalScan.polish(held, best, v.name(), POLISH_WINDOW, backend,
             sub.withTimeLimit(left.dividedBy(2)));
         solves++;
-        if (near != null && model.maxViolation(near) <= WarmStarts.TOLERANCE
-            && model.objective().value(near) < cost - IMPROVEMENT * Math.max(1, Math.abs(cost))) {
+        if (near != null && lowers(model, near, cost)) {
           best = near;
           cost = model.objective().value(best);
           better = true;
@@ -166,6 +162,19 @@ public final class FleetStarts {
       }
     }
     return new Improved(best, solves);
+  }
+
+  /** {@code model} with every vehicle but {@code v} held at {@code x}, and {@code v} held to its target there. */
+  private static Milp heldRoundOthers(Scenario s, Milp model, double[] x, Vehicle v) {
+    Set<String> others = new HashSet<>();
+    s.vehicles().stream().filter(o -> o != v).forEach(o -> others.add(o.name()));
+    return toItsTarget(fix(model, model, x, others, true), x, v.name());
+  }
+
+  /** Whether {@code x} satisfies {@code model} and costs less than {@code cost} by more than {@link #IMPROVEMENT}. */
+  private static boolean lowers(Milp model, double[] x, double cost) {
+    return model.maxViolation(x) <= WarmStarts.TOLERANCE
+        && model.objective().value(x) < cost - IMPROVEMENT * Math.max(1, Math.abs(cost));
   }
 
   /**
