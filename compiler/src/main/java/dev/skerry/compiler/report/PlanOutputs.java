@@ -66,10 +66,13 @@ public final class PlanOutputs {
           Format.number(c.box().ymax()), c.zones().isEmpty() ? "no zones (unused)" : String.join(", ", c.zones())));
     }
     if (r.verified()) {
-      b.append(String.format(Locale.ROOT, "verified: %d segments clear of every zone (closest %s m beyond the radius),"
-              + " inside the area, within limits (speed %s, accel %s of the limit)%n",
-          r.verify().segmentsChecked(), Format.number(r.verify().minClearance()),
-          percent(r.verify().speedExcess()), percent(r.verify().accelExcess())));
+      // with no zones the least clearance is infinite: said in words, not as a number
+      double clearance = r.verify().minClearance();
+      String zones = Double.isFinite(clearance)
+          ? "clear of every zone (closest " + Format.number(clearance) + " m beyond the radius)" : "(no zones)";
+      b.append(String.format(Locale.ROOT, "verified: %d segments %s, inside the area, within limits (speed %s, accel"
+              + " %s of the limit)%n", r.verify().segmentsChecked(), zones, percent(r.verify().speedExcess()),
+          percent(r.verify().accelExcess())));
       if (r.verify().hasPairs()) {
         b.append(String.format(Locale.ROOT, "separated: every pair of vehicles keeps its distance while both fly"
             + " (closest %s m beyond it)%n", Format.number(r.verify().minSeparation())));
@@ -213,11 +216,16 @@ public final class PlanOutputs {
     o.add("clusters", clusters);
     JsonObject verify = new JsonObject();
     verify.addProperty("ok", r.verify().ok());
-    verify.addProperty("minClearance", r.verify().minClearance());
+    // JSON has no infinity: with no zones there is no least clearance, and the key is left out
+    if (Double.isFinite(r.verify().minClearance())) {
+      verify.addProperty("minClearance", r.verify().minClearance());
+    }
     verify.addProperty("speedRatio", 1 + r.verify().speedExcess());
     verify.addProperty("accelRatio", 1 + r.verify().accelExcess());
     if (r.verify().hasPairs()) {
-      verify.addProperty("minSeparation", r.verify().minSeparation());
+      if (Double.isFinite(r.verify().minSeparation())) {
+        verify.addProperty("minSeparation", r.verify().minSeparation());
+      }
     }
     JsonArray violations = new JsonArray();
     for (Violation v : r.verify().violations()) {

@@ -49,6 +49,40 @@ class SolveCommandTest {
   }
 
   /**
+   * Open water, no zones: the least clearance is infinite, which JSON cannot hold (RFC 8259 §6:
+   * "Infinity and NaN are not permitted"); the file leaves the key out and the summary says there are
+   * no zones.
+   */
+  @Test
+  void aScenarioWithNoZonesGivesValidJson() throws Exception {
+    Path f = write("open.skerry", """
+        scenario open_water
+        units m, s
+        vehicle skiff {
+          start (1, 1) at rest
+          speed max 2 m/s
+          accel max 1 m/s^2
+          radius 0.5 m
+        }
+        area sea box (0, 0) to (30, 20)
+        target dock point (25, 5) within 0.5 m at rest
+        plan {
+          step 1 s
+          horizon 30
+          minimize time
+        }
+        """);
+    Path json = dir.resolve("open.json");
+    Run r = run("solve", "--solver", "scip", f.toString(), "--json", json.toString());
+    assertEquals(0, r.code(), r.out() + r.err());
+    assertTrue(r.out().contains("(no zones)") && !r.out().contains("Infinity"), r.out());
+    String text = Files.readString(json);
+    assertTrue(!text.contains("Infinity") && !text.contains("NaN"), text);
+    JsonObject verify = JsonParser.parseString(text).getAsJsonObject().getAsJsonObject("verify");
+    assertTrue(verify.get("ok").getAsBoolean() && !verify.has("minClearance"), verify::toString);
+  }
+
+  /**
    * One solve writes all three outputs. Outside check of the SVG: {@code rsvg-convert} from
    * Debian's librsvg2-bin renders it to a PNG; the JDK's XML parser checks it is well-formed.
    */
