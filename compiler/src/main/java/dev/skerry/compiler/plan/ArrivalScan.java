@@ -273,6 +273,7 @@ public final class ArrivalScan {
       active.addAll(coveredZones(model));
       everBroken.putAll(turns(model, last, guide.owner()));
       fixSides(model, active, everBroken, last, fixed, window);
+      SoonerArrival.fixFarSeparation(model, last, fixed);
     }
     boolean shifted = false; // the visits moved one step later already
     for (int round = 1; round <= MAX_ROUNDS; round++) {
@@ -299,6 +300,7 @@ public final class ArrivalScan {
         // the path may need to change sides further from where it ran into the zone: free more
         window = windows[Arrays.binarySearch(windows, window) + 1];
         fixSides(model, active, everBroken, last, fixed, window);
+      SoonerArrival.fixFarSeparation(model, last, fixed);
         continue;
       }
       double[] x = r.values();
@@ -315,6 +317,7 @@ public final class ArrivalScan {
       active.addAll(broken.keySet());
       broken.forEach((zone, slots) -> everBroken.computeIfAbsent(zone, k -> new TreeSet<>()).addAll(slots));
       fixSides(model, active, everBroken, x, fixed, window);
+      SoonerArrival.fixFarSeparation(model, x, fixed);
     }
     return new Attempt(null, solves);
   }
@@ -395,6 +398,7 @@ public final class ArrivalScan {
       }
     }
     fixSides(model, coveredZones(model), turns(model, x, owner), x, fixed, window);
+    SoonerArrival.fixFarSeparation(model, x, fixed);
     SolveResult r = backend.solve(withBounds(model, fixed), options.withWarmStart(x));
     if (!r.status().hasSolution() || !(model.maxViolation(r.values()) <= WarmStarts.TOLERANCE)) {
       return null;
@@ -405,7 +409,7 @@ public final class ArrivalScan {
   }
 
   /** Every zone (or cluster) with a cover row in the model. */
-  private static Set<String> coveredZones(Milp model) {
+  static Set<String> coveredZones(Milp model) {
     Set<String> zones = new TreeSet<>();
     for (Row r : model.rows()) {
       if (r.origin().role().equals("cover")) {
@@ -434,6 +438,9 @@ public final class ArrivalScan {
     }
     covers.sort((a, b) -> Integer.compare(a.origin().step(), b.origin().step()));
     for (Row cover : covers) {
+      if (WarmStarts.rest(model, cover, x) >= cover.lower() - WarmStarts.TOLERANCE) {
+        continue; // a slot the arrival covers: its side is no turn
+      }
       String zone = cover.origin().entity();
       int face = WarmStarts.bestFace(model, cover, margin);
       // a face binary is named ..._f<face>_<slot>: the face, whatever binaries pruning left the slot
@@ -486,11 +493,18 @@ public final class ArrivalScan {
    * fixed at 1 and the slot's other faces at 0, or every face at 0 where the arrival relaxation
    * covers the slot.
    */
-  private static void fixSides(Milp model, Set<String> active, Map<String, Set<Integer>> everBroken, double[] x,
+  static void fixSides(Milp model, Set<String> active, Map<String, Set<Integer>> everBroken, double[] x,
       Map<Integer, Double> fixed, int window) {
+    fixSides(model, active, everBroken, x, fixed, window, null);
+  }
+
+  /** As {@link #fixSides(Milp, Set, Map, double[], Map, int)}, for vehicle {@code owner}'s slots only (null: all). */
+  static void fixSides(Milp model, Set<String> active, Map<String, Set<Integer>> everBroken, double[] x,
+      Map<Integer, Double> fixed, int window, String owner) {
     Map<Integer, Double> margin = WarmStarts.margins(model, x);
     for (Row cover : model.rows()) {
-      if (!cover.origin().role().equals("cover") || !active.contains(cover.origin().entity())) {
+      if (!cover.origin().role().equals("cover") || !active.contains(cover.origin().entity())
+          || (owner != null && !cover.origin().owner().equals(owner))) {
         continue;
       }
       int slot = cover.origin().step();
@@ -506,7 +520,11 @@ public final class ArrivalScan {
         if (!WarmStarts.isFace(v) || v.lower() == v.upper()) {
           continue;
         }
-        if (near || (face < 0 && !relaxed)) {
+        if (relaxed) {
+          // the arrival covers the slot (every caller holds the arrival, so it stays covered): no
+          // side to keep, and every face at 0 lets its rows go
+          fixed.put(c, 0.0);
+        } else if (near || face < 0) {
           fixed.remove(c);
         } else {
           fixed.put(c, c == face ? 1.0 : 0.0);
@@ -536,7 +554,7 @@ public final class ArrivalScan {
    * found is checked against the whole model before it is used, so dropping a row can never let a
    * wrong start through; it only makes each small solve cheaper.
    */
-  private static Milp withBounds(Milp model, Map<Integer, Double> fixed) {
+  static Milp withBounds(Milp model, Map<Integer, Double> fixed) {
     List<Variable> vars = new ArrayList<>(model.columnCount());
     for (Variable v : model.variables()) {
       Double value = fixed.get(v.index());

@@ -43,60 +43,17 @@ public final class FleetStarts {
       Duration cap) {
     long t0 = System.nanoTime();
     try {
-      int n = s.vehicles().size();
-      boolean slow = backend.branchesSlowly();
-      Duration perRound = slow ? Planner.scanBudget(options).dividedBy(n)
-          : options.timeLimit().map(l -> l.dividedBy(n + 1)).orElse(cap.multipliedBy(2));
-      SolveOptions sub = options.withWarmStart(null).withTimeLimit(perRound);
-      Milp previous = null;
-      double[] values = null;
-      Set<String> fixed = new HashSet<>();
-      for (int i = 1; i <= n; i++) {
-        if (options.cancel().isCancelled()) {
-          return none(t0, i - 1, "cancelled");
-        }
-        if (slow) {
-          // what an earlier round left unused passes on: the first skiff of the twin skiffs takes
-          // 0.6 s of its half, and the second, which must find its way round the first, then has
-          // caps twice as long for its small solves
-          Duration unused = Planner.scanBudget(options).minus(WarmStarts.since(t0));
-          perRound = unused.isNegative() ? Duration.ofMillis(1) : unused.dividedBy(n - i + 1);
-          sub = sub.withTimeLimit(perRound);
-        }
-        Milp round = round(s, i, previous, values, fixed, slow);
-        // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
-        // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
-        // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
-        // model when it finds nothing.
-        WarmStarts.Start lazy = slow && ArrivalScan.applies(round) ? ArrivalScan.find(s, round, backend, sub, perRound)
-            : WarmStarts.find(round, backend, sub, cap);
-        if (lazy.found()) {
-          values = lazy.values();
-        } else {
-          // a slow backend's scan may have used its whole share; the round's model gets what is left
-          Duration left = perRound.minus(lazy.wallTime());
-          SolveResult r = backend.solve(round, slow ? sub.withTimeLimit(left.isNegative() || left.isZero()
-              ? Duration.ofMillis(1) : left) : sub);
-          if (!r.status().hasSolution()) {
-            return none(t0, i, "vehicle " + s.vehicles().get(i - 1).name() + " after the earlier ones: " + r.summary()
-                + (lazy.reason().isEmpty() ? "" : " (before that: " + lazy.reason() + ")"));
-          }
-          values = r.values();
-        }
-        previous = round;
-        fixed.add(s.vehicles().get(i - 1).name());
+      // a slow backend's rounds share the scan's time; what they leave goes to improving their plan
+      Duration budget = backend.branchesSlowly() ? Planner.scanBudget(options) : null;
+      InTurn r = inTurn(s, model, backend, options, cap, budget);
+      if (r.values() == null) {
+        return none(t0, r.rounds(), r.reason());
       }
-      if (previous.columnCount() != model.columnCount()) {
-        return none(t0, n, "the last round's model differs from the full one");
-      }
-      double violation = model.maxViolation(values);
-      if (!(violation <= WarmStarts.TOLERANCE)) {
-        return none(t0, n, "the start violates the model by " + violation);
-      }
-      int rounds = n;
-      if (slow) {
-        Duration left = Planner.scanBudget(options).minus(WarmStarts.since(t0));
-        Improved better = improve(s, model, values, backend, sub, left);
+      double[] values = r.values();
+      int rounds = r.rounds();
+      if (budget != null) {
+        Improved better = improve(s, model, values, backend, options.withWarmStart(null),
+            budget.minus(WarmStarts.since(t0)));
         values = better.values();
         rounds += better.rounds();
       }
@@ -106,62 +63,175 @@ public final class FleetStarts {
     }
   }
 
-  private record Improved(double[] values, int rounds) {}
+  /** The point the rounds gave (null if none, and why), and the solves they took. */
+  private record InTurn(double[] values, int rounds, String reason) {}
 
   /**
-   * For a slow backend, with time left after the rounds: each vehicle in turn planned again with
-   * every other vehicle's path and arrival held (the arrival scan on the full model so fixed),
-   * keeping a plan only when it lowers the whole objective; until a pass over all vehicles improves
-   * nothing or the time is out. The rounds plan each vehicle round the earlier ones only; planning
-   * the first again round the later ones is where a crossing's cost is shared. Each vehicle gets a
-   * fresh scan, then its route polished with its turns free to move ({@link ArrivalScan#polish}).
-   * On the twin skiffs this brings the rounds' plan from up to 3.7 % above the optimum to 0.13 %
-   * most often; the optimum has the north skiff a step later and the south one a step earlier,
-   * which no vehicle replanned alone reaches (a step later for one, then the other replanned round
-   * it, was tried and not kept: the second skiff's scan did not find its earlier step).
+   * The vehicles planned in turn, each round the ones before: each round's solve capped at {@code
+   * cap}, or for a slow backend ({@code budget} not null) the rounds sharing {@code budget}, a
+   * round's unused time passing on to the next.
+   */
+  private static InTurn inTurn(Scenario s, Milp model, SolverBackend backend, SolveOptions options, Duration cap,
+      Duration budget) {
+    long t0 = System.nanoTime();
+    int n = s.vehicles().size();
+    boolean slow = budget != null;
+    Duration perRound = slow ? budget.dividedBy(n)
+        : options.timeLimit().map(l -> l.dividedBy(n + 1)).orElse(cap.multipliedBy(2));
+    SolveOptions sub = options.withWarmStart(null).withTimeLimit(perRound);
+    Milp previous = null;
+    double[] values = null;
+    Set<String> fixed = new HashSet<>();
+    for (int i = 1; i <= n; i++) {
+      if (options.cancel().isCancelled()) {
+        return new InTurn(null, i - 1, "cancelled");
+      }
+      if (slow) {
+        // what an earlier round left unused passes on: the first skiff of the twin skiffs takes
+        // 0.6 s of its half, and the second, which must find its way round the first, then has
+        // caps twice as long for its small solves
+        Duration unused = budget.minus(WarmStarts.since(t0));
+        perRound = unused.isNegative() ? Duration.ofMillis(1) : unused.dividedBy(n - i + 1);
+        sub = sub.withTimeLimit(perRound);
+      }
+      Vehicle next = s.vehicles().get(i - 1);
+      Milp round = round(s, i, previous, values, fixed, slow);
+      // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
+      // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
+      // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
+      // model when it finds nothing.
+      WarmStarts.Start lazy = slow && ArrivalScan.applies(round) ? ArrivalScan.find(s, round, backend, sub, perRound)
+          : WarmStarts.find(round, backend, sub, cap);
+      if (lazy.found()) {
+        values = lazy.values();
+      } else {
+        // a slow backend's scan may have used its whole share; the round's model gets what is left
+        Duration left = perRound.minus(lazy.wallTime());
+        SolveResult r = backend.solve(round, slow ? sub.withTimeLimit(left.isNegative() || left.isZero()
+            ? Duration.ofMillis(1) : left) : sub);
+        if (!r.status().hasSolution()) {
+          return new InTurn(null, i, "vehicle " + next.name() + " after the earlier ones: " + r.summary()
+              + (lazy.reason().isEmpty() ? "" : " (before that: " + lazy.reason() + ")"));
+        }
+        values = r.values();
+      }
+      previous = round;
+      fixed.add(next.name());
+    }
+    if (previous.columnCount() != model.columnCount()) {
+      return new InTurn(null, n, "the last round's model differs from the full one");
+    }
+    double violation = model.maxViolation(values);
+    if (!(violation <= WarmStarts.TOLERANCE)) {
+      return new InTurn(null, n, "the start violates the model by " + violation);
+    }
+    return new InTurn(values, n, "");
+  }
+
+  private record Improved(double[] values, int rounds) {}
+
+  /** The best point of {@link #improve} so far. */
+  private static final class Incumbent {
+    private final Milp model;
+    private double[] x;
+
+    Incumbent(Milp model, double[] x) {
+      this.model = model;
+      this.x = x;
+    }
+
+    /** Takes {@code y} (may be null) if it is a point of the model that lowers the objective; whether it did. */
+    boolean offer(double[] y) {
+      if (y == null || !lowers(model, y, model.objective().value(x))) {
+        return false;
+      }
+      x = y;
+      return true;
+    }
+  }
+
+  /**
+   * For a slow backend, with time left after the rounds, moves that keep a point only when it lowers
+   * the whole objective, in passes until one improves nothing or the time is out:
+   *
+   * <ol>
+   *   <li>each vehicle a step sooner with the whole fleet solved again round it, the latest first
+   *       ({@link SoonerArrival#of}): the rounds make a later vehicle give way to an earlier one's
+   *       fixed path, and this move lets the earlier one bend aside (on the twin skiffs it took the
+   *       rounds' 61.83 to 59.64, the optimum being 59.63);
+   *   <li>every vehicle's turns free to move at once, the separation binaries free where a pair
+   *       comes near ({@link SoonerArrival#polish});
+   *   <li>each vehicle planned again with every other vehicle's path and arrival held (a fresh
+   *       arrival scan on the full model so fixed), then its route polished with its turns free to
+   *       move ({@link ArrivalScan#polish}): the rounds plan each vehicle round the earlier ones
+   *       only, and this plans the first again round the later ones.
+   * </ol>
+   *
+   * <p>On the twin skiffs the optimum has the north skiff a step later and the south one a step
+   * earlier than the rounds' plan most often has (north first); none of these moves reaches it from
+   * there (BENCHMARKS.md). Tried and not kept: the vehicles also planned in the reverse order, each
+   * order with half the time; the reverse order's plan, improved, was the better one in one run of
+   * eleven (59.80), and the halved time left the given order's worse.
    */
   private static Improved improve(Scenario s, Milp model, double[] start, SolverBackend backend, SolveOptions sub,
       Duration budget) {
     long t0 = System.nanoTime();
-    double[] best = start;
-    double cost = model.objective().value(start);
+    Incumbent best = new Incumbent(model, start);
+    List<String> names = s.vehicles().stream().map(Vehicle::name).toList();
     int solves = 0;
     boolean better = true;
     while (better) {
       better = false;
-      for (Vehicle v : s.vehicles()) {
-        Duration left = budget.minus(WarmStarts.since(t0));
-        if (left.isNegative() || left.isZero() || sub.cancel().isCancelled()) {
-          return new Improved(best, solves);
+      List<Vehicle> latestFirst = new ArrayList<>(s.vehicles());
+      double[] at = best.x;
+      latestFirst.sort((a, b) -> Integer.compare(SoonerArrival.arrivalStep(model, at, b.name()),
+          SoonerArrival.arrivalStep(model, at, a.name())));
+      for (Vehicle v : latestFirst) {
+        Duration left = left(budget, t0);
+        if (left.isZero() || sub.cancel().isCancelled()) {
+          return new Improved(best.x, solves);
         }
-        Milp held = heldRoundOthers(s, model, best, v);
+        better |= best.offer(SoonerArrival.of(model, best.x, v.name(), backend, sub.withTimeLimit(left.dividedBy(2))));
+        solves++;
+      }
+      Duration spare = left(budget, t0);
+      if (spare.isZero() || sub.cancel().isCancelled()) {
+        return new Improved(best.x, solves);
+      }
+      better |= best.offer(SoonerArrival.polish(model, best.x, names, POLISH_WINDOW, backend,
+          sub.withTimeLimit(spare.dividedBy(2))));
+      solves++;
+      for (Vehicle v : s.vehicles()) {
+        Duration left = left(budget, t0);
+        if (left.isZero() || sub.cancel().isCancelled()) {
+          return new Improved(best.x, solves);
+        }
+        Milp held = heldRoundOthers(s, model, best.x, v);
         if (!ArrivalScan.applies(held)) {
           continue;
         }
-        // a fresh scan round the others, then the route kept with its turns free to move
         WarmStarts.Start again = ArrivalScan.find(s, held, backend, sub.withTimeLimit(left), left.dividedBy(2));
         solves += again.rounds();
-        if (again.found() && lowers(model, again.values(), cost)) {
-          best = again.values();
-          cost = model.objective().value(best);
+        if (best.offer(again.values())) {
           better = true;
-          held = heldRoundOthers(s, model, best, v);
+          held = heldRoundOthers(s, model, best.x, v);
         }
-        left = budget.minus(WarmStarts.since(t0));
-        if (left.isNegative() || left.isZero()) {
-          return new Improved(best, solves);
+        left = left(budget, t0);
+        if (left.isZero()) {
+          return new Improved(best.x, solves);
         }
-        double[] near = ArrivalScan.polish(held, best, v.name(), POLISH_WINDOW, backend,
-            sub.withTimeLimit(left.dividedBy(2)));
+        better |= best.offer(ArrivalScan.polish(held, best.x, v.name(), POLISH_WINDOW, backend,
+            sub.withTimeLimit(left.dividedBy(2))));
         solves++;
-        if (near != null && lowers(model, near, cost)) {
-          best = near;
-          cost = model.objective().value(best);
-          better = true;
-        }
       }
     }
-    return new Improved(best, solves);
+    return new Improved(best.x, solves);
+  }
+
+  /** What is left of {@code budget} since {@code t0}, never negative. */
+  private static Duration left(Duration budget, long t0) {
+    Duration left = budget.minus(WarmStarts.since(t0));
+    return left.isNegative() ? Duration.ZERO : left;
   }
 
   /** {@code model} with every vehicle but {@code v} held at {@code x}, and {@code v} held to its target there. */
