@@ -115,8 +115,13 @@ final class GuidePath {
       return Optional.empty();
     }
     Graph g = new Graph(s, v, grown);
-    // in a fleet any vehicle may pass a waypoint: the guide leaves them to the MILP
-    List<Waypoint> wps = s.fleet() ? List.of() : s.waypoints();
+    // in a fleet any vehicle may pass a waypoint: the guide takes only those left to this vehicle
+    List<Waypoint> wps = new ArrayList<>();
+    for (Waypoint w : s.waypoints()) {
+      if (leftTo(model, owner, w.name())) {
+        wps.add(w);
+      }
+    }
     List<Vec2> route = null;
     List<Integer> order = null;
     double[] wpArc = new double[wps.size()];
@@ -143,6 +148,29 @@ final class GuidePath {
     Profile p = Profile.fastest(shortest, v0, target.atRest() ? 0 : v.maxSpeed(), v.maxSpeed(), v.maxAccel());
     return Optional.of(new GuidePath(model, owner, route, wpArc, names,
         s.plan().step(), p));
+  }
+
+  /**
+   * Whether vehicle {@code owner} must pass waypoint {@code name} in {@code model}: it may (a free
+   * visit binary) and no other vehicle does or may (another's visit binaries all fixed at 0). A
+   * fleet's first round, or a later one whose earlier vehicles passed elsewhere, leaves a waypoint
+   * to the vehicle planned; where another vehicle may pass it the MILP decides.
+   */
+  private static boolean leftTo(Milp model, String owner, String name) {
+    boolean mine = false;
+    for (Variable v : model.variables()) {
+      if (!v.origin().role().equals("visit") || !v.origin().entity().equals(name)) {
+        continue;
+      }
+      if (!v.origin().owner().equals(owner)) {
+        if (v.upper() > 0.5) {
+          return false;
+        }
+      } else {
+        mine |= v.lower() < v.upper();
+      }
+    }
+    return mine;
   }
 
   /** The first arrival step at which the guide's profile has reached the target. */

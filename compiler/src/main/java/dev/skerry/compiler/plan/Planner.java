@@ -124,7 +124,7 @@ public final class Planner {
       // For a fleet the zone-by-zone heuristic keeps every separation binary in each restricted
       // solve and cost more than it saved (twin_skiffs: 12.2 s with it, 5.5 s without); planning the
       // vehicles one after another costs about one single-vehicle solve per vehicle instead.
-      boolean scan = !s.fleet() && backend.branchesSlowly() && ArrivalScan.applies(milp);
+      boolean scan = !s.fleet() && backend.branchesSlowly() && ArrivalScan.appliesToSomeTarget(milp);
       boolean grouped = scan && ClusterStarts.applies(s, lowered.layout().clusters(), milp);
       WarmStarts.Start start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
           : grouped ? ClusterStarts.find(s, lowered.layout().clusters(), milp, backend, options, scanBudget(options))

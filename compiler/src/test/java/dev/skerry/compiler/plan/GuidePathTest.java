@@ -123,4 +123,33 @@ class GuidePathTest {
     }
     return sum;
   }
+
+  /**
+   * In a fleet a waypoint is the guided vehicle's to pass only when no other vehicle may: in the
+   * first round (one vehicle planned) the guide passes the buoy; in the whole fleet's model, where
+   * the other craft's visit binaries are free, it leaves the buoy to the MILP.
+   */
+  @Test
+  void inAFleetTheGuidePassesOnlyTheWaypointsLeftToItsVehicle() {
+    Waypoint w = new Waypoint("buoy", new Vec2(5, 4), 1, null);
+    Scenario one = scenario(vehicle(new Vec2(0, 0), 2, 1, 0, 8), box(-5, -5, 15, 10), List.of(),
+        target(box(9.9, -0.1, 10.1, 0.1), true), List.of(w), plan(1.0, 30, 1, 0));
+    dev.skerry.compiler.model.Vehicle skiff = one.vehicle().withTarget("berth");
+    dev.skerry.compiler.model.Vehicle tug = one.vehicle().withName("tug").withStart(new Vec2(0, 8), Vec2.ZERO, 0, 0)
+        .withTarget("quay");
+    Scenario fleet = one.withVehiclesAndTargets(List.of(skiff, tug), List.of(one.target(),
+        new dev.skerry.compiler.model.Target("quay", box(9.9, 7.9, 10.1, 8.1), true, null)));
+    Milp first = FleetStarts.round(fleet, 1, null, null, java.util.Set.of(), true);
+    assertTrue(GuidePath.of(fleet, first).orElseThrow().passes("buoy"));
+    Milp whole = Lowering.lower(fleet);
+    List<dev.skerry.compiler.milp.Variable> vars = new java.util.ArrayList<>();
+    for (dev.skerry.compiler.milp.Variable v : whole.variables()) {
+      boolean tugArrives = v.origin().role().equals("arrive") && v.origin().owner().equals("tug");
+      vars.add(tugArrives ? new dev.skerry.compiler.milp.Variable(v.index(), v.name(), v.type(), 0, 0, v.origin()) : v);
+    }
+    Milp skiffFree = new Milp(whole.name(), vars, whole.rows(), whole.objective());
+    GuidePath g = GuidePath.of(fleet, skiffFree).orElseThrow();
+    assertEquals("skiff", g.owner());
+    assertFalse(g.passes("buoy"));
+  }
 }
