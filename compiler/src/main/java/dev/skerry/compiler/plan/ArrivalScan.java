@@ -12,6 +12,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -196,7 +197,7 @@ public final class ArrivalScan {
    */
   static Map<String, List<Variable>> targetGroups(Milp model) {
     Map<String, List<Variable>> byTarget = new TreeMap<>();
-    Set<String> owners = new java.util.HashSet<>();
+    Set<String> owners = new HashSet<>();
     for (Variable v : model.variables()) {
       if (v.origin().role().equals("arrive") && v.lower() < v.upper()) {
         byTarget.computeIfAbsent(v.origin().owner() + "/" + v.origin().entity(), k -> new ArrayList<>()).add(v);
@@ -366,7 +367,7 @@ public final class ArrivalScan {
         // the path may need to change sides further from where it ran into the zone: free more
         window = windows[Arrays.binarySearch(windows, window) + 1];
         fixSides(model, active, everBroken, last, fixed, window);
-      SoonerArrival.fixFarSeparation(model, last, fixed);
+        SoonerArrival.fixFarSeparation(model, last, fixed);
         continue;
       }
       double[] x = r.values();
@@ -490,7 +491,8 @@ public final class ArrivalScan {
 
   /**
    * For each zone, the slots of vehicle {@code owner} at which the face the point {@code x} keeps
-   * best differs from the previous slot's, or where no face holds at it.
+   * best differs from the previous slot's, or where no face holds at it; slots the arrival covers at x
+   * (after it) are none.
    */
   static Map<String, Set<Integer>> turns(Milp model, double[] x, String owner) {
     Map<Integer, Double> margin = WarmStarts.margins(model, x);

@@ -17,9 +17,11 @@ import java.util.Set;
  *
  * <p>Why: planning the vehicles one after another ({@link FleetStarts}) makes a later vehicle give
  * way to an earlier one's fixed path, and replanning one vehicle with the others held cannot undo
- * that, as the others never move aside. On the twin skiffs planned south skiff first, the north
- * skiff arrives at step 16 round the south one's path; the optimum has it at step 15 with the south
- * skiff's path bent a little to let it by, which this move finds in about 2 s with ojAlgo.
+ * that, as the others never move aside. On the twin skiffs the rounds sometimes have the south
+ * skiff arriving at step 16 round the north one's path (61.83); this move brings it to step 15,
+ * the north skiff's path bent a little to let it by (59.64, optimum 59.63), in 2–3 s with ojAlgo.
+ * With the skiffs planned the other way round (south first, the north at step 16) it found the
+ * optimum itself.
  *
  * <p>The model solved: every arrival binary fixed (the vehicle's at its step less one, the others'
  * as they are); the vehicle's path sampled again along its own track, played faster to arrive a
