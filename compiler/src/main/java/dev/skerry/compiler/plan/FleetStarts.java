@@ -100,7 +100,8 @@ public final class FleetStarts {
       // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
       // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
       // model when it finds nothing.
-      WarmStarts.Start lazy = slow && ArrivalScan.appliesToSomeTarget(round) ? ArrivalScan.find(s, round, backend, sub, perRound)
+      WarmStarts.Start lazy = slow && ArrivalScan.appliesToSomeTarget(round)
+          ? ArrivalScan.find(s, round, backend, sub, perRound)
           : WarmStarts.find(round, backend, sub, cap);
       if (lazy.found()) {
         values = lazy.values();
