@@ -5,8 +5,10 @@ import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.model.PlanOptions;
 import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.solve.Backends;
+import dev.skerry.compiler.solve.ProgressTicker;
 import dev.skerry.compiler.solve.SolveMonitor;
 import dev.skerry.compiler.solve.SolveOptions;
+import dev.skerry.compiler.solve.SolveProgress;
 import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.verify.Verifier;
 import dev.skerry.compiler.verify.VerifyReport;
@@ -76,6 +78,12 @@ public final class Planner {
     return b.build();
   }
 
+  /** {@code monitor} with {@code before} added to each event's elapsed time. */
+  private static SolveMonitor after(Duration before, SolveMonitor monitor) {
+    return p -> monitor.onProgress(new SolveProgress(p.backendId(), p.elapsed().plus(before), p.incumbent(),
+        p.bound()));
+  }
+
   /** Solver options from the plan block: time limit, gap and threads. */
   public static SolveOptions optionsOf(PlanOptions plan) {
     SolveOptions o = SolveOptions.defaults().withRelativeGap(plan.relativeGap());
@@ -126,10 +134,17 @@ public final class Planner {
       // vehicles one after another costs about one single-vehicle solve per vehicle instead.
       boolean scan = !s.fleet() && backend.branchesSlowly() && ArrivalScan.appliesToSomeTarget(milp);
       boolean grouped = scan && ClusterStarts.applies(s, lowered.layout().clusters(), milp);
-      WarmStarts.Start start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
-          : grouped ? ClusterStarts.find(s, lowered.layout().clusters(), milp, backend, options, scanBudget(options))
-          : scan ? ArrivalScan.find(s, milp, backend, options, scanBudget(options))
-          : WarmStarts.find(milp, backend, options, WARM_START_CAP);
+      WarmStarts.Start start;
+      // the search for a start can take most of the limit (ojAlgo): its time goes out as progress too
+      try (ProgressTicker ticker = new ProgressTicker(backend.id() + ", finding a start", monitor,
+          ProgressTicker.DEFAULT_PERIOD)) {
+        start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
+            : grouped ? ClusterStarts.find(s, lowered.layout().clusters(), milp, backend, options, scanBudget(options))
+            : scan ? ArrivalScan.find(s, milp, backend, options, scanBudget(options))
+            : WarmStarts.find(milp, backend, options, WARM_START_CAP);
+      }
+      Duration before = start.wallTime();
+      monitor = after(before, monitor);
       run = lessTime(start.found() ? options.withWarmStart(start.values()) : run, options, start);
       if (!start.found()) {
         notes.add("no warm start: " + start.reason());

@@ -12,9 +12,12 @@ import dev.skerry.compiler.model.Scenario;
 import dev.skerry.compiler.solve.Backends;
 import dev.skerry.compiler.solve.SolveMonitor;
 import dev.skerry.compiler.solve.SolveOptions;
+import dev.skerry.compiler.solve.SolveProgress;
 import dev.skerry.compiler.solve.SolveStatus;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
+import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -101,8 +104,10 @@ class ExampleSolveTest {
     PlanResult scip = plan(s, "scip");
     assertSolvedAndVerified(scip);
     SolveOptions o = Planner.optionsOf(s.plan()).withTimeLimit(s.fleet() ? OJALGO_FLEET : OJALGO_FULL);
-    PlanResult ojalgo = PLANNER.plan(s, "ojalgo", o, SolveMonitor.NONE);
+    List<SolveProgress> events = new CopyOnWriteArrayList<>();
+    PlanResult ojalgo = PLANNER.plan(s, "ojalgo", o, events::add);
     System.out.println(s.name() + " ojalgo: " + ojalgo.solve().summary() + " " + ojalgo.solve().warnings());
+    assertProgressCoversTheStart(ojalgo, events);
     assertTrue(ojalgo.solve().status().hasSolution(), ojalgo.solve()::summary);
     assertTrue(ojalgo.verified(), () -> String.valueOf(ojalgo.verify()));
     double x = scip.solve().objective();
@@ -112,6 +117,28 @@ class ExampleSolveTest {
       assertTrue(y <= x * 1.01, () -> "ojAlgo " + y + ", SCIP " + x);
     } else {
       assertAgree(s, scip, ojalgo);
+    }
+  }
+
+  /**
+   * ojAlgo's search for a start takes seconds (most of the limit on the fleet): it goes out as
+   * progress labelled as such, and the solve's own events then count on from it, so the elapsed
+   * time a user sees never goes back. The start's time is read from the plan's warm-start note.
+   */
+  private static void assertProgressCoversTheStart(PlanResult r, List<SolveProgress> events) {
+    double startMs = r.solve().warnings().stream().filter(w -> w.startsWith("warm start:"))
+        .map(w -> java.util.regex.Pattern.compile(" in ([0-9.]+) s").matcher(w))
+        .filter(java.util.regex.Matcher::find).mapToDouble(m -> 1000 * Double.parseDouble(m.group(1)))
+        .findFirst().orElse(0);
+    List<SolveProgress> start = events.stream().filter(e -> e.backendId().endsWith("finding a start")).toList();
+    List<SolveProgress> solve = events.stream().filter(e -> !e.backendId().endsWith("finding a start")).toList();
+    if (startMs >= 1000) {
+      assertTrue(!start.isEmpty(), "a start found in " + startMs + " ms, and no progress while it was sought");
+    }
+    double lastStart = start.stream().mapToDouble(e -> e.elapsed().toMillis()).max().orElse(0);
+    for (SolveProgress e : solve) {
+      assertTrue(e.elapsed().toMillis() >= Math.max(lastStart, startMs) - 1,
+          "the solve's event at " + e.elapsed().toMillis() + " ms, after a start that took " + startMs + " ms");
     }
   }
 
