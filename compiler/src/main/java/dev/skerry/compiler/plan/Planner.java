@@ -136,8 +136,8 @@ public final class Planner {
       boolean grouped = scan && ClusterStarts.applies(s, lowered.layout().clusters(), milp);
       WarmStarts.Start start;
       // the search for a start can take most of the limit (ojAlgo): its time goes out as progress too
-      try (ProgressTicker ticker = new ProgressTicker(backend.id() + ", finding a start", monitor,
-          ProgressTicker.DEFAULT_PERIOD)) {
+      try (ProgressTicker ticker = monitor == SolveMonitor.NONE ? null
+          : new ProgressTicker(backend.id() + ", finding a start", monitor, ProgressTicker.DEFAULT_PERIOD)) {
         start = s.fleet() ? FleetStarts.find(s, milp, backend, options, WARM_START_CAP)
             : grouped ? ClusterStarts.find(s, lowered.layout().clusters(), milp, backend, options, scanBudget(options))
             : scan ? ArrivalScan.find(s, milp, backend, options, scanBudget(options))
