@@ -111,7 +111,8 @@ public final class Planner {
    * As {@link #plan(Scenario, String, SolveOptions, SolveMonitor)}, offering {@code hint} (may be
    * null) a first look at the lowered model: a point it returns that the model accepts is the warm
    * start (the closed loop hands in its previous plan shifted by one step); otherwise the
-   * heuristic of {@link WarmStarts} runs as usual.
+   * heuristic of {@link WarmStarts} runs as usual. The result's wall time includes the search for
+   * a start (its own time is in the warm-start note).
    */
   public PlanResult plan(Scenario s, String solverId, SolveOptions options, SolveMonitor monitor,
       java.util.function.Function<Milp, double[]> hint) {
@@ -121,6 +122,7 @@ public final class Planner {
     SolverBackend backend = choice.backend();
     SolveOptions run = options;
     List<String> notes = new ArrayList<>();
+    Duration searched = Duration.ZERO;
     if (hint != null && backend.takesWarmStart() && backend.exact() && options.warmStart().isEmpty()) {
       double[] given = hint.apply(milp);
       if (given != null && milp.maxViolation(given) <= 1e-6) {
@@ -143,8 +145,8 @@ public final class Planner {
             : scan ? ArrivalScan.find(s, milp, backend, options, scanBudget(options))
             : WarmStarts.find(milp, backend, options, WARM_START_CAP);
       }
-      Duration before = start.wallTime();
-      monitor = after(before, monitor);
+      searched = start.wallTime();
+      monitor = after(searched, monitor);
       run = lessTime(start.found() ? options.withWarmStart(start.values()) : run, options, start);
       if (!start.found()) {
         notes.add("no warm start: " + start.reason());
@@ -162,6 +164,10 @@ public final class Planner {
       }
     }
     SolveResult result = withNotes(backend.solve(milp, run, monitor), notes);
+    if (!searched.isZero()) {
+      // the time a user waited (and the closed loop's compute time per step) includes the start's
+      result = result.toBuilder().wallTime(result.wallTime().plus(searched)).build();
+    }
     if (!result.status().hasSolution()) {
       return new PlanResult(s, milp, result, List.of(), List.of(), null, choice.notice());
     }
