@@ -457,22 +457,41 @@ public final class ArrivalScan {
   static double[] polish(Milp model, double[] x, String owner, int window, SolverBackend backend,
       SolveOptions options) {
     Map<Integer, Double> fixed = new HashMap<>();
+    holdArrivals(model, x, owner, fixed);
+    fixSides(model, coveredZones(model), turns(model, x, owner), x, fixed, window);
+    double[] y = solveHeld(model, fixed, x, x, backend, options);
+    if (y == null) {
+      return null;
+    }
+    boolean better = model.objective().minimize() ? model.objective().value(y) < model.objective().value(x)
+        : model.objective().value(y) > model.objective().value(x);
+    return better ? y : null;
+  }
+
+  /**
+   * Holds the free arrival and visit binaries of vehicle {@code owner} (null: of every vehicle) at
+   * their values in x, rounded.
+   */
+  static void holdArrivals(Milp model, double[] x, String owner, Map<Integer, Double> fixed) {
     for (Variable v : model.variables()) {
       String role = v.origin().role();
-      if ((role.equals("arrive") || role.equals("visit")) && v.origin().owner().equals(owner)
+      if ((role.equals("arrive") || role.equals("visit")) && (owner == null || v.origin().owner().equals(owner))
           && v.lower() < v.upper()) {
         fixed.put(v.index(), x[v.index()] > 0.5 ? 1.0 : 0.0);
       }
     }
-    fixSides(model, coveredZones(model), turns(model, x, owner), x, fixed, window);
-    SoonerArrival.fixFarSeparation(model, x, fixed);
-    SolveResult r = backend.solve(withBounds(model, fixed), options.withWarmStart(x));
-    if (!r.status().hasSolution() || !(model.maxViolation(r.values()) <= WarmStarts.TOLERANCE)) {
-      return null;
-    }
-    boolean better = model.objective().minimize() ? model.objective().value(r.values()) < model.objective().value(x)
-        : model.objective().value(r.values()) > model.objective().value(x);
-    return better ? r.values() : null;
+  }
+
+  /**
+   * {@code model} with {@code fixed} and the separation binaries of slots far apart at {@code
+   * point} fixed too, solved from {@code from} (null: no start): the point if the whole model
+   * accepts it, else null.
+   */
+  static double[] solveHeld(Milp model, Map<Integer, Double> fixed, double[] point, double[] from,
+      SolverBackend backend, SolveOptions options) {
+    SoonerArrival.fixFarSeparation(model, point, fixed);
+    SolveResult r = backend.solve(withBounds(model, fixed), options.withWarmStart(from));
+    return r.status().hasSolution() && model.maxViolation(r.values()) <= WarmStarts.TOLERANCE ? r.values() : null;
   }
 
   /** Every zone (or cluster) with a cover row in the model. */

@@ -4,7 +4,6 @@ import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.Row;
 import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.solve.SolveOptions;
-import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.solve.SolverBackend;
 import java.util.HashMap;
 import java.util.List;
@@ -49,19 +48,9 @@ final class SoonerArrival {
     }
     double[] point = retimed(model, x, vehicle, arrival, arrival - 1);
     Map<Integer, Double> fixed = new HashMap<>();
-    for (Variable v : model.variables()) {
-      String role = v.origin().role();
-      if ((role.equals("arrive") || role.equals("visit")) && v.lower() < v.upper()) {
-        fixed.put(v.index(), point[v.index()]);
-      }
-    }
+    ArrivalScan.holdArrivals(model, point, null, fixed);
     ArrivalScan.fixSides(model, ArrivalScan.coveredZones(model), Map.of(), point, fixed, ArrivalScan.NEAREST);
-    fixFarSeparation(model, point, fixed);
-    SolveResult r = backend.solve(ArrivalScan.withBounds(model, fixed), options.withWarmStart(null));
-    if (!r.status().hasSolution() || !(model.maxViolation(r.values()) <= WarmStarts.TOLERANCE)) {
-      return null;
-    }
-    return r.values();
+    return ArrivalScan.solveHeld(model, fixed, point, null, backend, options);
   }
 
   /**
@@ -74,22 +63,12 @@ final class SoonerArrival {
   static double[] polish(Milp model, double[] x, List<String> vehicles, int window, SolverBackend backend,
       SolveOptions options) {
     Map<Integer, Double> fixed = new HashMap<>();
-    for (Variable v : model.variables()) {
-      String role = v.origin().role();
-      if ((role.equals("arrive") || role.equals("visit")) && v.lower() < v.upper()) {
-        fixed.put(v.index(), x[v.index()] > 0.5 ? 1.0 : 0.0);
-      }
-    }
+    ArrivalScan.holdArrivals(model, x, null, fixed);
     Set<String> zones = ArrivalScan.coveredZones(model);
     for (String vehicle : vehicles) {
       ArrivalScan.fixSides(model, zones, ArrivalScan.turns(model, x, vehicle), x, fixed, window, vehicle);
     }
-    fixFarSeparation(model, x, fixed);
-    SolveResult r = backend.solve(ArrivalScan.withBounds(model, fixed), options.withWarmStart(x));
-    if (!r.status().hasSolution() || !(model.maxViolation(r.values()) <= WarmStarts.TOLERANCE)) {
-      return null;
-    }
-    return r.values();
+    return ArrivalScan.solveHeld(model, fixed, x, x, backend, options);
   }
 
   /** The step at which {@code vehicle} arrives at x, or -1. */

@@ -222,10 +222,8 @@ public final class PlanOutputs {
     }
     verify.addProperty("speedRatio", 1 + r.verify().speedExcess());
     verify.addProperty("accelRatio", 1 + r.verify().accelExcess());
-    if (r.verify().hasPairs()) {
-      if (Double.isFinite(r.verify().minSeparation())) {
-        verify.addProperty("minSeparation", r.verify().minSeparation());
-      }
+    if (r.verify().hasPairs() && Double.isFinite(r.verify().minSeparation())) {
+      verify.addProperty("minSeparation", r.verify().minSeparation());
     }
     JsonArray violations = new JsonArray();
     for (Violation v : r.verify().violations()) {

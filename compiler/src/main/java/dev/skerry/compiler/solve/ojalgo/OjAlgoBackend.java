@@ -253,8 +253,7 @@ public final class OjAlgoBackend implements SolverBackend {
             stopAskedAt[0] = elapsed.toNanos();
           }
           if (stopAskedAt[0] >= 0 && elapsed.toNanos() - stopAskedAt[0] > GRACE.toNanos()) {
-            return new Outcome(null, null, cancel.isCancelled() ? StopReason.CANCELLED
-                : sufficed ? StopReason.SOLVER_LIMIT : StopReason.TIME_LIMIT, true);
+            return new Outcome(null, null, stopReason(options, sufficed), true);
           }
         }
       }
