@@ -11,6 +11,7 @@ import dev.skerry.compiler.solve.SolveResult;
 import dev.skerry.compiler.solve.SolverBackend;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -19,18 +20,22 @@ import java.util.Set;
 
 /**
  * A warm start for a fleet by planning its vehicles one after another (prioritised planning, common
- * practice): round i lowers the scenario with the first i vehicles, fixes the states and inputs of
- * the first i−1 to the previous round's plan, and finds a plan for vehicle i, which must keep clear
- * of the earlier vehicles' fixed paths and take a target they left: by the zone-by-zone heuristic of
- * {@link WarmStarts} (the earlier vehicles' rows are fixed data, so its restricted models hold one
- * vehicle's nearby zones), else by solving the round's model. Each round gets an equal share of
- * the time limit (one share is left for the solve proper) and costs about one vehicle alone; for a
- * slow backend (the arrival scan) the rounds share the scan's budget, a round's unused time passing
- * on to the next, and time left after the last goes to planning each vehicle again round the
- * others ({@link #improve}). The last round's model is the full model
- * with all but the last vehicle fixed: its solution is a point of the full model, handed back only
- * when the full model accepts it. An earlier vehicle's fixed path may leave a later one no way
- * through; then there is no start and the reason says which round failed.
+ * practice): round i lowers the scenario with the first i vehicles of the order, fixes the states
+ * and inputs of the first i−1 to the previous round's plan, and finds a plan for vehicle i, which
+ * must keep clear of the earlier vehicles' fixed paths and take a target they left: by the
+ * zone-by-zone heuristic of {@link WarmStarts} (the earlier vehicles' rows are fixed data, so its
+ * restricted models hold one vehicle's nearby zones), else by solving the round's model. Each round
+ * gets an equal share of the time limit (one share is left for the solve proper) and costs about
+ * one vehicle alone; for a slow backend (the arrival scan) the rounds share the scan's budget, a
+ * round's unused time passing on to the next, and time left after the last goes to planning each
+ * vehicle again round the others ({@link #improve}); a slow backend plans the reverse order too,
+ * each order with half the budget, and keeps the cheaper plan (the order decides who gives way
+ * where two vehicles cross, and an order whose earlier vehicles leave a later one no way through
+ * may have a reverse that works).
+ * The last round's model is the full model with all but the last vehicle fixed: its solution is a
+ * point of the full model, handed back only when the full model accepts it. An earlier vehicle's
+ * fixed path may leave a later one no way through; when every order tried fails so, there is no
+ * start and the reason says which round of each failed.
  */
 public final class FleetStarts {
   /** Roles of the columns that fix a vehicle's path: states and inputs, plan view and altitude. */
@@ -38,26 +43,58 @@ public final class FleetStarts {
 
   private FleetStarts() {}
 
-  /** A start for {@code model} (the lowered {@code s}), each round's solve capped at {@code cap}. */
+  /**
+   * A start for {@code model} (the lowered {@code s}), each round's solve capped at {@code cap}. A
+   * slow backend plans the fleet in two orders, the given one and its reverse, each improved
+   * ({@link #improve}), and keeps the cheaper: which vehicle gives way decides the plan (below).
+   */
   public static WarmStarts.Start find(Scenario s, Milp model, SolverBackend backend, SolveOptions options,
       Duration cap) {
     long t0 = System.nanoTime();
     try {
-      // a slow backend's rounds share the scan's time; what they leave goes to improving their plan
-      Duration budget = backend.branchesSlowly() ? Planner.scanBudget(options) : null;
-      InTurn r = inTurn(s, model, backend, options, cap, budget);
-      if (r.values() == null) {
-        return none(t0, r.rounds(), r.reason());
+      if (!backend.branchesSlowly()) {
+        InTurn r = inTurn(s, model, s.vehicles(), backend, options, cap, null);
+        return r.values() == null ? none(t0, r.rounds(), r.reason())
+            : new WarmStarts.Start(r.values(), model.objective().value(r.values()), WarmStarts.since(t0), r.rounds(),
+                0, "");
       }
-      double[] values = r.values();
-      int rounds = r.rounds();
-      if (budget != null) {
-        Improved better = improve(s, model, values, backend, options.withWarmStart(null),
-            budget.minus(WarmStarts.since(t0)));
-        values = better.values();
+      // A slow backend's rounds share the scan's time; what they leave goes to improving their plan.
+      // The first order gets half of it and the reverse order what is left: on the twin skiffs the
+      // given order has the south skiff give way (59.71 most often, improved or not), the reverse
+      // the north one, which the step-sooner move takes to the optimum (59.63).
+      Duration budget = Planner.scanBudget(options);
+      List<List<Vehicle>> orders = new ArrayList<>(List.of(s.vehicles()));
+      if (s.vehicles().size() > 1) {
+        List<Vehicle> reverse = new ArrayList<>(s.vehicles());
+        Collections.reverse(reverse);
+        orders.add(reverse);
+      }
+      double[] best = null;
+      int rounds = 0;
+      List<String> reasons = new ArrayList<>();
+      for (int k = 0; k < orders.size(); k++) {
+        Duration share = left(budget, t0).dividedBy(orders.size() - k);
+        if (share.isZero() || options.cancel().isCancelled()) {
+          break;
+        }
+        long t1 = System.nanoTime();
+        InTurn r = inTurn(s, model, orders.get(k), backend, options, cap, share);
+        rounds += r.rounds();
+        if (r.values() == null) {
+          reasons.add(r.reason());
+          continue;
+        }
+        Improved better = improve(s, model, r.values(), backend, options.withWarmStart(null),
+            share.minus(WarmStarts.since(t1)));
         rounds += better.rounds();
+        if (best == null || model.objective().value(better.values()) < model.objective().value(best)) {
+          best = better.values();
+        }
       }
-      return new WarmStarts.Start(values, model.objective().value(values), WarmStarts.since(t0), rounds, 0, "");
+      if (best == null) {
+        return none(t0, rounds, reasons.isEmpty() ? "no time left" : String.join("; in reverse order: ", reasons));
+      }
+      return new WarmStarts.Start(best, model.objective().value(best), WarmStarts.since(t0), rounds, 0, "");
     } catch (RuntimeException e) {
       return none(t0, 0, "heuristic failed: " + e);
     }
@@ -71,8 +108,8 @@ public final class FleetStarts {
    * cap}, or for a slow backend ({@code budget} not null) the rounds sharing {@code budget}, a
    * round's unused time passing on to the next.
    */
-  private static InTurn inTurn(Scenario s, Milp model, SolverBackend backend, SolveOptions options, Duration cap,
-      Duration budget) {
+  private static InTurn inTurn(Scenario s, Milp model, List<Vehicle> order, SolverBackend backend,
+      SolveOptions options, Duration cap, Duration budget) {
     long t0 = System.nanoTime();
     int n = s.vehicles().size();
     boolean slow = budget != null;
@@ -94,8 +131,8 @@ public final class FleetStarts {
         perRound = unused.isNegative() ? Duration.ofMillis(1) : unused.dividedBy(n - i + 1);
         sub = sub.withTimeLimit(perRound);
       }
-      Vehicle next = s.vehicles().get(i - 1);
-      Milp round = round(s, i, previous, values, fixed, slow);
+      Vehicle next = order.get(i - 1);
+      Milp round = round(s, order.subList(0, i), previous, values, fixed, slow);
       // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
       // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
       // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
@@ -156,10 +193,14 @@ public final class FleetStarts {
    * the whole objective, in passes until one improves nothing or the time is out:
    *
    * <ol>
+   *   <li>the whole fleet solved again with every vehicle on the sides of the zones it keeps ({@link
+   *       SoonerArrival#onItsSides}): a vehicle planned round another's fixed path gave way with a
+   *       detour, which straightens once both may move (the twin skiffs planned south first: the
+   *       rounds' 60.67 to the optimum 59.63 in 1–2 s);
    *   <li>each vehicle a step sooner with the whole fleet solved again round it, the latest first
    *       ({@link SoonerArrival#of}): the rounds make a later vehicle give way to an earlier one's
    *       fixed path, and this move lets the earlier one bend aside (on the twin skiffs it took the
-   *       rounds' 61.83 to 59.64, the optimum being 59.63);
+   *       rounds' 61.83 to 59.64);
    *   <li>every vehicle's turns free to move at once, the separation binaries free where a pair
    *       comes near ({@link SoonerArrival#polish});
    *   <li>each vehicle planned again with every other vehicle's path and arrival held (a fresh
@@ -168,11 +209,10 @@ public final class FleetStarts {
    *       only, and this plans the first again round the later ones.
    * </ol>
    *
-   * <p>On the twin skiffs the optimum has the north skiff a step later and the south one a step
-   * earlier than the rounds' plan most often has (north first); none of these moves reaches it from
-   * there (BENCHMARKS.md). Tried and not kept: the vehicles also planned in the reverse order, each
-   * order with half the time; the reverse order's plan, improved, was the better one in one run of
-   * eleven (59.80), and the halved time left the given order's worse.
+   * <p>None of these moves changes which vehicle gives way where two cross: on the twin skiffs the
+   * optimum has the north skiff a step later and the south one a step sooner than the plan in the
+   * given order (north first, 59.71 most often), which is why {@link #find} plans the reverse order
+   * too.
    */
   private static Improved improve(Scenario s, Milp model, double[] start, SolverBackend backend, SolveOptions sub,
       Duration budget) {
@@ -187,6 +227,22 @@ public final class FleetStarts {
       double[] at = best.x;
       latestFirst.sort((a, b) -> Integer.compare(SoonerArrival.arrivalStep(model, at, b.name()),
           SoonerArrival.arrivalStep(model, at, a.name())));
+      Duration first = left(budget, t0);
+      if (first.isZero() || sub.cancel().isCancelled()) {
+        return new Improved(best.x, solves);
+      }
+      better |= best.offer(SoonerArrival.onItsSides(model, best.x, backend,
+          sub.withTimeLimit(first.multipliedBy(3).dividedBy(4))));
+      solves++;
+      for (Vehicle v : s.vehicles()) {
+        Duration left = left(budget, t0);
+        if (left.isZero() || sub.cancel().isCancelled()) {
+          return new Improved(best.x, solves);
+        }
+        double[] guided = onItsGuide(s, model, best.x, v, backend, sub.withTimeLimit(left.dividedBy(4)));
+        better |= best.offer(guided);
+        solves += guided == null ? 0 : 1;
+      }
       for (Vehicle v : latestFirst) {
         Duration left = left(budget, t0);
         if (left.isZero() || sub.cancel().isCancelled()) {
@@ -227,6 +283,47 @@ public final class FleetStarts {
       }
     }
     return new Improved(best.x, solves);
+  }
+
+  /**
+   * A point of {@code model} with vehicle {@code v} on the sides of its shortest way round the zones
+   * ({@link GuidePath}, played to arrive at its step at x) and every other vehicle on the sides it
+   * keeps at x, the fleet solved round it with every arrival held; null when the guide's sides are
+   * the ones v keeps already, or there is no guide or no point. The rounds plan each vehicle from a
+   * scan whose small solves stop at a 2 % gap, so a vehicle planned alone may take the longer way
+   * round a zone (the twin skiffs planned south first: now and then the south skiff north of the
+   * seal rock, 61.83; this move puts it south of the rock, 61.54, and the north skiff's step-sooner
+   * move then finds the optimum, 59.63).
+   */
+  static double[] onItsGuide(Scenario s, Milp model, double[] x, Vehicle v, SolverBackend backend,
+      SolveOptions options) {
+    GuidePath guide;
+    try {
+      guide = GuidePath.of(s, heldRoundOthers(s, model, x, v)).orElse(null);
+    } catch (RuntimeException e) {
+      return null; // a move is a help, never a reason to fail
+    }
+    int arrival = SoonerArrival.arrivalStep(model, x, v.name());
+    if (guide == null || arrival < 1) {
+      return null;
+    }
+    double[] point = guide.at(arrival);
+    Set<String> zones = ArrivalScan.coveredZones(model);
+    Map<Integer, Double> now = new HashMap<>();
+    ArrivalScan.fixSides(model, zones, Map.of(), x, now, ArrivalScan.NEAREST, v.name());
+    Map<Integer, Double> fixed = new HashMap<>();
+    ArrivalScan.fixSides(model, zones, Map.of(), point, fixed, ArrivalScan.NEAREST, v.name());
+    if (fixed.equals(now)) {
+      return null;
+    }
+    ArrivalScan.holdArrivals(model, point, v.name(), fixed);
+    for (Vehicle o : s.vehicles()) {
+      if (o != v) {
+        ArrivalScan.holdArrivals(model, x, o.name(), fixed);
+        ArrivalScan.fixSides(model, zones, Map.of(), x, fixed, ArrivalScan.NEAREST, o.name());
+      }
+    }
+    return ArrivalScan.solveHeld(model, fixed, point, null, backend, options);
   }
 
   /** What is left of {@code budget} since {@code t0}, never negative. */
@@ -280,16 +377,26 @@ public final class FleetStarts {
    * dropped too, so a vehicle that names none cannot take a target a later vehicle needs.
    */
   static Scenario firstVehicles(Scenario s, int count) {
-    List<Vehicle> kept = s.vehicles().subList(0, count);
-    Set<String> namedLater = new HashSet<>();
-    for (Vehicle v : s.vehicles().subList(count, s.vehicles().size())) {
-      if (v.target() != null) {
-        namedLater.add(v.target());
+    return withVehicles(s, s.vehicles().subList(0, count));
+  }
+
+  /**
+   * The scenario with the vehicles of {@code planned} only, in the scenario's order (so that the
+   * round with all of them lowers to the full model), and without the targets the others name.
+   */
+  static Scenario withVehicles(Scenario s, List<Vehicle> planned) {
+    List<Vehicle> kept = new ArrayList<>();
+    Set<String> namedByOthers = new HashSet<>();
+    for (Vehicle v : s.vehicles()) {
+      if (planned.contains(v)) {
+        kept.add(v);
+      } else if (v.target() != null) {
+        namedByOthers.add(v.target());
       }
     }
     List<Target> targets = new ArrayList<>();
     for (Target t : s.targets()) {
-      if (!namedLater.contains(t.name())) {
+      if (!namedByOthers.contains(t.name())) {
         targets.add(t);
       }
     }
@@ -301,13 +408,19 @@ public final class FleetStarts {
     return firstVehicles(s, count);
   }
 
-  /**
-   * The model of round {@code i}: the first {@code i} vehicles, those in {@code fixed} held to the
-   * previous round's plan ({@code previous} and {@code values}; null in round 1), with their
-   * arrival binaries too when {@code arrivals}.
-   */
+  /** The model of round {@code i} in the scenario's own order (below). */
   static Milp round(Scenario s, int i, Milp previous, double[] values, Set<String> fixed, boolean arrivals) {
-    Milp round = Lowering.lower(firstVehicles(s, i));
+    return round(s, s.vehicles().subList(0, i), previous, values, fixed, arrivals);
+  }
+
+  /**
+   * The model of the round that plans the last of {@code planned}: those vehicles, those in {@code
+   * fixed} held to the previous round's plan ({@code previous} and {@code values}; null in round 1),
+   * with their arrival binaries too when {@code arrivals}.
+   */
+  static Milp round(Scenario s, List<Vehicle> planned, Milp previous, double[] values, Set<String> fixed,
+      boolean arrivals) {
+    Milp round = Lowering.lower(withVehicles(s, planned));
     return previous == null ? round : fix(round, previous, values, fixed, arrivals);
   }
 

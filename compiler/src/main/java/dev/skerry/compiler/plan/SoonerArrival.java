@@ -11,8 +11,11 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * A move for a fleet's start: one vehicle arrives a step sooner and the whole fleet is solved again
- * round it, every vehicle free to move within the sides of the zones it already keeps.
+ * Moves for a fleet's start, each a small solve of the whole fleet with every arrival held: one
+ * vehicle a step sooner ({@link #of}), the fleet on its own sides ({@link #onItsSides}), every
+ * vehicle's turns free ({@link #polish}). The first is the one the name is for: one vehicle arrives
+ * a step sooner and the whole fleet is solved again round it, every vehicle free to move within the
+ * sides of the zones it already keeps.
  *
  * <p>Why: planning the vehicles one after another ({@link FleetStarts}) makes a later vehicle give
  * way to an earlier one's fixed path, and replanning one vehicle with the others held cannot undo
@@ -51,6 +54,22 @@ final class SoonerArrival {
     ArrivalScan.holdArrivals(model, point, null, fixed);
     ArrivalScan.fixSides(model, ArrivalScan.coveredZones(model), Map.of(), point, fixed, ArrivalScan.NEAREST);
     return ArrivalScan.solveHeld(model, fixed, point, null, backend, options);
+  }
+
+  /**
+   * A point of {@code model} no dearer than {@code x} (a point of the model) with every vehicle
+   * keeping the sides it keeps at x, or null: every arrival and visit held, each zone slot's face
+   * fixed to the side x keeps (window {@link ArrivalScan#NEAREST}), the separation binaries free
+   * where a pair comes near; solved from x. Nearly a plain LP: the whole fleet moves at once along
+   * its own sides, so a vehicle that gave way in the rounds with a detour (planned round another's
+   * fixed path) takes the straighter line the other leaves it once both may move. On the twin
+   * skiffs planned south first, from the rounds' 60.67 to the optimum 59.63 in 1–2 s with ojAlgo.
+   */
+  static double[] onItsSides(Milp model, double[] x, SolverBackend backend, SolveOptions options) {
+    Map<Integer, Double> fixed = new HashMap<>();
+    ArrivalScan.holdArrivals(model, x, null, fixed);
+    ArrivalScan.fixSides(model, ArrivalScan.coveredZones(model), Map.of(), x, fixed, ArrivalScan.NEAREST);
+    return ArrivalScan.solveHeld(model, fixed, x, x, backend, options);
   }
 
   /**
