@@ -28,10 +28,10 @@ import java.util.Set;
  * gets an equal share of the time limit (one share is left for the solve proper) and costs about
  * one vehicle alone; for a slow backend (the arrival scan) the rounds share the scan's budget, a
  * round's unused time passing on to the next, and time left after the last goes to planning each
- * vehicle again round the others ({@link #improve}); a slow backend plans the reverse order too,
- * each order with half the budget, and keeps the cheaper plan (the order decides who gives way
- * where two vehicles cross, and an order whose earlier vehicles leave a later one no way through
- * may have a reverse that works).
+ * vehicle again round the others ({@link #improve}); a slow backend plans the reverse order too
+ * and keeps the cheaper plan (the order decides who gives way where two vehicles cross, and an
+ * order whose earlier vehicles leave a later one no way through may have a reverse that works):
+ * the given order's rounds may take the whole budget, its improvement ends at half of it.
  * The last round's model is the full model with all but the last vehicle fixed: its solution is a
  * point of the full model, handed back only when the full model accepts it. An earlier vehicle's
  * fixed path may leave a later one no way through; when every order tried fails so, there is no
@@ -59,9 +59,10 @@ public final class FleetStarts {
                 0, "");
       }
       // A slow backend's rounds share the scan's time; what they leave goes to improving their plan.
-      // The first order gets half of it and the reverse order what is left: on the twin skiffs the
-      // given order has the south skiff give way (59.71 most often, improved or not), the reverse
-      // the north one, which the step-sooner move takes to the optimum (59.63).
+      // The given order's rounds may take the whole budget (as many vehicles may need it), its
+      // improvement what is left of the first half; the reverse order has the rest. On the twin
+      // skiffs the given order has the south skiff give way (59.71 most often, improved or not),
+      // the reverse the north one, which the moves take to the optimum (59.63).
       Duration budget = Planner.scanBudget(options);
       List<List<Vehicle>> orders = new ArrayList<>(List.of(s.vehicles()));
       if (s.vehicles().size() > 1) {
@@ -73,19 +74,20 @@ public final class FleetStarts {
       int rounds = 0;
       List<String> reasons = new ArrayList<>();
       for (int k = 0; k < orders.size(); k++) {
-        Duration share = left(budget, t0).dividedBy(orders.size() - k);
-        if (share.isZero() || options.cancel().isCancelled()) {
+        Duration left = left(budget, t0);
+        if (left.isZero() || options.cancel().isCancelled()) {
           break;
         }
-        long t1 = System.nanoTime();
-        InTurn r = inTurn(s, model, orders.get(k), backend, options, cap, share);
+        InTurn r = inTurn(s, model, orders.get(k), backend, options, cap, left);
         rounds += r.rounds();
         if (r.values() == null) {
           reasons.add(r.reason());
           continue;
         }
+        // this order's improvement ends where its share of the budget does
+        Duration share = budget.multipliedBy(k + 1).dividedBy(orders.size());
         Improved better = improve(s, model, r.values(), backend, options.withWarmStart(null),
-            share.minus(WarmStarts.since(t1)));
+            share.minus(WarmStarts.since(t0)));
         rounds += better.rounds();
         if (best == null || model.objective().value(better.values()) < model.objective().value(best)) {
           best = better.values();
@@ -197,6 +199,8 @@ public final class FleetStarts {
    *       SoonerArrival#onItsSides}): a vehicle planned round another's fixed path gave way with a
    *       detour, which straightens once both may move (the twin skiffs planned south first: the
    *       rounds' 60.67 to the optimum 59.63 in 1–2 s);
+   *   <li>each vehicle on the sides of its shortest way round the zones, the fleet solved round it
+   *       ({@link #onItsGuide});
    *   <li>each vehicle a step sooner with the whole fleet solved again round it, the latest first
    *       ({@link SoonerArrival#of}): the rounds make a later vehicle give way to an earlier one's
    *       fixed path, and this move lets the earlier one bend aside (on the twin skiffs it took the

@@ -81,9 +81,9 @@ class ExampleSolveTest {
   /**
    * ojAlgo's time on the fleet: its rounds plan one skiff after the other, in the given order and
    * in the reverse, each improved, in three quarters of the limit ({@link FleetStarts}). Measured
-   * with {@code skerry solve --time-limit 40}: SCIP's optimum in seven runs of eight, 0.13 % above
-   * it in the eighth (before the reverse order and the moves onto a skiff's own sides and shortest
-   * way: 0.13 % in three runs of four and 0.18 % in the fourth).
+   * with {@code skerry solve --time-limit 40}: SCIP's optimum in eight runs of eleven, 0.13 % above
+   * it in the other three (before the reverse order and the moves onto a skiff's own sides and
+   * shortest way: 0.13 % in three runs of four and 0.18 % in the fourth).
    */
   static final Duration OJALGO_FLEET = Duration.ofSeconds(40);
 
