@@ -29,9 +29,10 @@ import java.util.Set;
  * one vehicle alone; for a slow backend (the arrival scan) the rounds share the scan's budget, a
  * round's unused time passing on to the next, and time left after the last goes to planning each
  * vehicle again round the others ({@link #improve}); a slow backend plans the reverse order too
- * and keeps the cheaper plan (the order decides who gives way where two vehicles cross, and an
- * order whose earlier vehicles leave a later one no way through may have a reverse that works):
- * the given order's rounds may take the whole budget, its improvement ends at half of it.
+ * and keeps the cheaper plan (the order decides who gives way where two vehicles cross; an order
+ * whose earlier vehicles leave a later one no way through may have a reverse that works, tried when
+ * the given order fails with time left): the given order's rounds may take the whole budget, its
+ * improvement ends at half of it.
  * The last round's model is the full model with all but the last vehicle fixed: its solution is a
  * point of the full model, handed back only when the full model accepts it. An earlier vehicle's
  * fixed path may leave a later one no way through; when every order tried fails so, there is no
