@@ -49,11 +49,7 @@ final class SoonerArrival {
     if (arrival <= 1) {
       return null;
     }
-    double[] point = retimed(model, x, vehicle, arrival, arrival - 1);
-    Map<Integer, Double> fixed = new HashMap<>();
-    ArrivalScan.holdArrivals(model, point, null, fixed);
-    ArrivalScan.fixSides(model, ArrivalScan.coveredZones(model), Map.of(), point, fixed, ArrivalScan.NEAREST);
-    return ArrivalScan.solveHeld(model, fixed, point, null, backend, options);
+    return onSidesOf(model, retimed(model, x, vehicle, arrival, arrival - 1), null, backend, options);
   }
 
   /**
@@ -66,10 +62,20 @@ final class SoonerArrival {
    * skiffs planned south first, from the rounds' 60.67 to the optimum 59.63 in 1–2 s with ojAlgo.
    */
   static double[] onItsSides(Milp model, double[] x, SolverBackend backend, SolveOptions options) {
+    return onSidesOf(model, x, x, backend, options);
+  }
+
+  /**
+   * The model with every arrival and visit held at {@code point}, each zone slot's face fixed to the
+   * side the point keeps (or is nearest), solved from {@code from} (null: no start); a point of the
+   * whole model, or null.
+   */
+  private static double[] onSidesOf(Milp model, double[] point, double[] from, SolverBackend backend,
+      SolveOptions options) {
     Map<Integer, Double> fixed = new HashMap<>();
-    ArrivalScan.holdArrivals(model, x, null, fixed);
-    ArrivalScan.fixSides(model, ArrivalScan.coveredZones(model), Map.of(), x, fixed, ArrivalScan.NEAREST);
-    return ArrivalScan.solveHeld(model, fixed, x, x, backend, options);
+    ArrivalScan.holdArrivals(model, point, null, fixed);
+    ArrivalScan.fixSides(model, ArrivalScan.coveredZones(model), Map.of(), point, fixed, ArrivalScan.NEAREST);
+    return ArrivalScan.solveHeld(model, fixed, point, from, backend, options);
   }
 
   /**
