@@ -17,6 +17,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Supplier;
 
 /**
  * A warm start for a fleet by planning its vehicles one after another (prioritised planning, common
@@ -27,12 +28,12 @@ import java.util.Set;
  * restricted models hold one vehicle's nearby zones), else by solving the round's model. Each round
  * gets an equal share of the time limit (one share is left for the solve proper) and costs about
  * one vehicle alone; for a slow backend (the arrival scan) the rounds share the scan's budget, a
- * round's unused time passing on to the next, and time left after the last goes to planning each
- * vehicle again round the others ({@link #improve}); a slow backend plans the reverse order too
- * and keeps the cheaper plan (the order decides who gives way where two vehicles cross; an order
- * whose earlier vehicles leave a later one no way through may have a reverse that works, tried when
- * the given order fails with time left): the given order's rounds may take the whole budget, its
- * improvement ends at half of it.
+ * round's unused time passing on to the next. A slow backend plans the reverse order too (the
+ * order decides who gives way where two vehicles cross; an order whose earlier vehicles leave a
+ * later one no way through may have a reverse that works): the given order's rounds may take the
+ * whole budget, the reverse's what they leave. The time left then goes to moves that plan vehicles
+ * again round the others ({@link Moves}): each order's plan through the cheap moves, the cheapest
+ * plan after them through all the moves.
  * The last round's model is the full model with all but the last vehicle fixed: its solution is a
  * point of the full model, handed back only when the full model accepts it. An earlier vehicle's
  * fixed path may leave a later one no way through; when every order tried fails so, there is no
@@ -46,8 +47,8 @@ public final class FleetStarts {
 
   /**
    * A start for {@code model} (the lowered {@code s}), each round's solve capped at {@code cap}. A
-   * slow backend plans the fleet in two orders, the given one and its reverse, each improved
-   * ({@link #improve}), and keeps the cheaper: which vehicle gives way decides the plan (below).
+   * slow backend plans the fleet in two orders, the given one and its reverse, improves each plan
+   * ({@link Moves}) and keeps the cheapest: which vehicle gives way decides the plan (below).
    */
   public static WarmStarts.Start find(Scenario s, Milp model, SolverBackend backend, SolveOptions options,
       Duration cap) {
@@ -59,45 +60,52 @@ public final class FleetStarts {
             : new WarmStarts.Start(r.values(), model.objective().value(r.values()), WarmStarts.since(t0), r.rounds(),
                 0, "");
       }
-      // A slow backend's rounds share the scan's time; what they leave goes to improving their plan.
-      // The given order's rounds may take the whole budget (as many vehicles may need it), its
-      // improvement what is left of the first half; the reverse order has the rest. On the twin
-      // skiffs the given order has the south skiff give way (59.71 most often, improved or not),
-      // the reverse the north one, which the moves take to the optimum (59.63).
+      // A slow backend's rounds share the scan's time: the given order's rounds may take all of it
+      // (as many vehicles may need), the reverse order's what they leave. Then each order's plan
+      // goes through the cheap moves, and the cheapest through all of them. On the twin skiffs the
+      // given order has the south skiff give way (59.71, which no move improves); the reverse the
+      // north one, whose rounds give 60.68, or now and then 61.9–62.1 in twice the time, and whose
+      // cheap moves reach the optimum, 59.63, in 1–6 s.
       Duration budget = Planner.scanBudget(options);
       List<List<Vehicle>> orders = new ArrayList<>(List.of(s.vehicles()));
-      if (s.vehicles().size() > 1) {
-        List<Vehicle> reverse = new ArrayList<>(s.vehicles());
-        Collections.reverse(reverse);
-        orders.add(reverse);
-      }
-      double[] best = null;
+      List<Vehicle> reverse = new ArrayList<>(s.vehicles());
+      Collections.reverse(reverse);
+      orders.add(reverse);
+      List<double[]> planned = new ArrayList<>();
       int rounds = 0;
       List<String> reasons = new ArrayList<>();
-      for (int k = 0; k < orders.size(); k++) {
+      for (List<Vehicle> order : orders) {
         Duration left = left(budget, t0);
         if (left.isZero() || options.cancel().isCancelled()) {
           break;
         }
-        InTurn r = inTurn(s, model, orders.get(k), backend, options, cap, left);
+        InTurn r = inTurn(s, model, order, backend, options, cap, left);
         rounds += r.rounds();
         if (r.values() == null) {
           reasons.add(r.reason());
-          continue;
-        }
-        // this order's improvement ends where its share of the budget does
-        Duration share = budget.multipliedBy(k + 1).dividedBy(orders.size());
-        Improved better = improve(s, model, r.values(), backend, options.withWarmStart(null),
-            share.minus(WarmStarts.since(t0)));
-        rounds += better.rounds();
-        if (best == null || model.objective().value(better.values()) < model.objective().value(best)) {
-          best = better.values();
+        } else {
+          planned.add(r.values());
         }
       }
-      if (best == null) {
+      if (planned.isEmpty()) {
         return none(t0, rounds, reasons.isEmpty() ? "no time left" : String.join("; in reverse order: ", reasons));
       }
-      return new WarmStarts.Start(best, model.objective().value(best), WarmStarts.since(t0), rounds, 0, "");
+      // the plans' cheap moves share what is left equally, a plan's unused time passing on; the
+      // cheapest plan then has the rest for all the moves
+      SolveOptions sub = options.withWarmStart(null);
+      Moves best = null;
+      for (int k = 0; k < planned.size(); k++) {
+        Moves moves = new Moves(s, model, planned.get(k), backend, sub)
+            .until(left(budget, t0).dividedBy(planned.size() - k)).cheap();
+        rounds += moves.solves;
+        if (best == null || moves.cost() < best.cost()) {
+          best = moves;
+        }
+      }
+      int before = best.solves;
+      best.until(left(budget, t0)).all();
+      rounds += best.solves - before;
+      return new WarmStarts.Start(best.x, best.cost(), WarmStarts.since(t0), rounds, 0, "");
     } catch (RuntimeException e) {
       return none(t0, 0, "heuristic failed: " + e);
     }
@@ -135,13 +143,17 @@ public final class FleetStarts {
         sub = sub.withTimeLimit(perRound);
       }
       Vehicle next = order.get(i - 1);
+      // the scan's guide is the shortest way of the round's free vehicle, named in the round's scenario
+      // (alone in round 1, where the columns carry no vehicle's name: the reverse order's first
+      // round was guided from the first vehicle's start)
+      Scenario planned = withVehicles(s, order.subList(0, i));
       Milp round = round(s, order.subList(0, i), previous, values, fixed, slow);
       // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
       // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
       // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
       // model when it finds nothing.
       WarmStarts.Start lazy = slow && ArrivalScan.appliesToSomeTarget(round)
-          ? ArrivalScan.find(s, round, backend, sub, perRound)
+          ? ArrivalScan.find(planned, round, backend, sub, perRound)
           : WarmStarts.find(round, backend, sub, cap);
       if (lazy.found()) {
         values = lazy.values();
@@ -169,31 +181,9 @@ public final class FleetStarts {
     return new InTurn(values, n, "");
   }
 
-  private record Improved(double[] values, int rounds) {}
-
-  /** The best point of {@link #improve} so far. */
-  private static final class Incumbent {
-    private final Milp model;
-    private double[] x;
-
-    Incumbent(Milp model, double[] x) {
-      this.model = model;
-      this.x = x;
-    }
-
-    /** Takes {@code y} (may be null) if it is a point of the model that lowers the objective; whether it did. */
-    boolean offer(double[] y) {
-      if (y == null || !lowers(model, y, model.objective().value(x))) {
-        return false;
-      }
-      x = y;
-      return true;
-    }
-  }
-
   /**
-   * For a slow backend, with time left after the rounds, moves that keep a point only when it lowers
-   * the whole objective, in passes until one improves nothing or the time is out:
+   * For a slow backend, moves that improve a point of the full model, each kept only when it lowers
+   * the whole objective, in passes until one improves nothing or the time is out. The cheap moves:
    *
    * <ol>
    *   <li>the whole fleet solved again with every vehicle on the sides of the zones it keeps ({@link
@@ -205,7 +195,12 @@ public final class FleetStarts {
    *   <li>each vehicle a step sooner with the whole fleet solved again round it, the latest first
    *       ({@link SoonerArrival#of}): the rounds make a later vehicle give way to an earlier one's
    *       fixed path, and this move lets the earlier one bend aside (on the twin skiffs it took the
-   *       rounds' 61.83 to 59.64);
+   *       rounds' 61.83 to 59.64).
+   * </ol>
+   *
+   * <p>The dear ones, which search longer:
+   *
+   * <ol>
    *   <li>every vehicle's turns free to move at once, the separation binaries free where a pair
    *       comes near ({@link SoonerArrival#polish});
    *   <li>each vehicle planned again with every other vehicle's path and arrival held (a fresh
@@ -219,75 +214,121 @@ public final class FleetStarts {
    * given order (north first, 59.71 most often), which is why {@link #find} plans the reverse order
    * too.
    */
-  private static Improved improve(Scenario s, Milp model, double[] start, SolverBackend backend, SolveOptions sub,
-      Duration budget) {
-    long t0 = System.nanoTime();
-    Incumbent best = new Incumbent(model, start);
-    List<String> names = s.vehicles().stream().map(Vehicle::name).toList();
-    int solves = 0;
-    boolean better = true;
-    while (better) {
-      better = false;
+  private static final class Moves {
+    private final Scenario s;
+    private final Milp model;
+    private final SolverBackend backend;
+    private final SolveOptions sub;
+    /** For each move, the point (by {@link #version}) at which it last ran. */
+    private final Map<String, Integer> ranAt = new HashMap<>();
+    private long deadline;
+    private double[] x;
+    /** How many times x has been improved. */
+    private int version;
+    private int solves;
+
+    Moves(Scenario s, Milp model, double[] start, SolverBackend backend, SolveOptions sub) {
+      this.s = s;
+      this.model = model;
+      this.backend = backend;
+      this.sub = sub;
+      this.x = start;
+    }
+
+    /** These moves, to stop {@code budget} from now. */
+    Moves until(Duration budget) {
+      deadline = System.nanoTime() + budget.toNanos();
+      return this;
+    }
+
+    double cost() {
+      return model.objective().value(x);
+    }
+
+    /** The cheap moves, in passes until one improves nothing or the time is out. */
+    Moves cheap() {
+      while (!out() && cheapPass()) {
+        // again from the better point
+      }
+      return this;
+    }
+
+    /** All the moves, in passes until one improves nothing or the time is out. */
+    Moves all() {
+      boolean better = true;
+      while (better && !out()) {
+        better = cheapPass();
+        better |= dearPass();
+      }
+      return this;
+    }
+
+    private boolean cheapPass() {
+      boolean better = attempt("sides", () -> SoonerArrival.onItsSides(model, x, backend,
+          sub.withTimeLimit(left().multipliedBy(3).dividedBy(4))));
+      for (Vehicle v : s.vehicles()) {
+        better |= attempt("guide " + v.name(), () -> onItsGuide(s, model, x, v, backend,
+            sub.withTimeLimit(left().dividedBy(4))));
+      }
       List<Vehicle> latestFirst = new ArrayList<>(s.vehicles());
-      double[] at = best.x;
+      double[] at = x;
       latestFirst.sort((a, b) -> Integer.compare(SoonerArrival.arrivalStep(model, at, b.name()),
           SoonerArrival.arrivalStep(model, at, a.name())));
-      Duration first = left(budget, t0);
-      if (first.isZero() || sub.cancel().isCancelled()) {
-        return new Improved(best.x, solves);
-      }
-      better |= best.offer(SoonerArrival.onItsSides(model, best.x, backend,
-          sub.withTimeLimit(first.multipliedBy(3).dividedBy(4))));
-      solves++;
-      for (Vehicle v : s.vehicles()) {
-        Duration left = left(budget, t0);
-        if (left.isZero() || sub.cancel().isCancelled()) {
-          return new Improved(best.x, solves);
-        }
-        double[] guided = onItsGuide(s, model, best.x, v, backend, sub.withTimeLimit(left.dividedBy(4)));
-        better |= best.offer(guided);
-        solves += guided == null ? 0 : 1;
-      }
       for (Vehicle v : latestFirst) {
-        Duration left = left(budget, t0);
-        if (left.isZero() || sub.cancel().isCancelled()) {
-          return new Improved(best.x, solves);
-        }
-        better |= best.offer(SoonerArrival.of(model, best.x, v.name(), backend, sub.withTimeLimit(left.dividedBy(2))));
-        solves++;
+        better |= attempt("sooner " + v.name(), () -> SoonerArrival.of(model, x, v.name(), backend,
+            sub.withTimeLimit(left().dividedBy(2))));
       }
-      Duration spare = left(budget, t0);
-      if (spare.isZero() || sub.cancel().isCancelled()) {
-        return new Improved(best.x, solves);
-      }
-      better |= best.offer(SoonerArrival.polish(model, best.x, names, POLISH_WINDOW, backend,
-          sub.withTimeLimit(spare.dividedBy(2))));
-      solves++;
+      return better;
+    }
+
+    private boolean dearPass() {
+      List<String> names = s.vehicles().stream().map(Vehicle::name).toList();
+      boolean better = attempt("polish", () -> SoonerArrival.polish(model, x, names, POLISH_WINDOW, backend,
+          sub.withTimeLimit(left().dividedBy(2))));
       for (Vehicle v : s.vehicles()) {
-        Duration left = left(budget, t0);
-        if (left.isZero() || sub.cancel().isCancelled()) {
-          return new Improved(best.x, solves);
-        }
-        Milp held = heldRoundOthers(s, model, best.x, v);
-        if (!ArrivalScan.applies(held)) {
+        if (!ArrivalScan.applies(heldRoundOthers(s, model, x, v))) {
           continue;
         }
-        WarmStarts.Start again = ArrivalScan.find(s, held, backend, sub.withTimeLimit(left), left.dividedBy(2));
-        solves += again.rounds();
-        if (best.offer(again.values())) {
-          better = true;
-          held = heldRoundOthers(s, model, best.x, v);
-        }
-        left = left(budget, t0);
-        if (left.isZero()) {
-          return new Improved(best.x, solves);
-        }
-        better |= best.offer(ArrivalScan.polish(held, best.x, v.name(), POLISH_WINDOW, backend,
-            sub.withTimeLimit(left.dividedBy(2))));
-        solves++;
+        better |= attempt("scan " + v.name(), () -> {
+          Duration left = left();
+          WarmStarts.Start again = ArrivalScan.find(s, heldRoundOthers(s, model, x, v), backend,
+              sub.withTimeLimit(left), left.dividedBy(2));
+          solves += again.rounds() - 1;
+          return again.values();
+        });
+        better |= attempt("polish " + v.name(), () -> ArrivalScan.polish(heldRoundOthers(s, model, x, v), x,
+            v.name(), POLISH_WINDOW, backend, sub.withTimeLimit(left().dividedBy(2))));
       }
+      return better;
     }
-    return new Improved(best.x, solves);
+
+    /**
+     * Runs {@code move} from x unless the time is out or it ran from this very point before (a move
+     * that found nothing finds nothing again); takes its point if that lowers the objective.
+     */
+    private boolean attempt(String move, Supplier<double[]> point) {
+      if (out() || Integer.valueOf(version).equals(ranAt.get(move))) {
+        return false;
+      }
+      ranAt.put(move, version);
+      double[] y = point.get();
+      solves++;
+      if (y == null || !lowers(model, y, cost())) {
+        return false;
+      }
+      x = y;
+      version++;
+      return true;
+    }
+
+    private Duration left() {
+      long n = deadline - System.nanoTime();
+      return n <= 0 ? Duration.ZERO : Duration.ofNanos(n);
+    }
+
+    private boolean out() {
+      return left().isZero() || sub.cancel().isCancelled();
+    }
   }
 
   /**

@@ -92,8 +92,9 @@ final class GuidePath {
       return Optional.empty();
     }
     String owner = arrivals.get(0).origin().owner();
-    Vehicle v = s.vehicles().stream().filter(c -> owner.isEmpty() || c.name().equals(owner)).findFirst()
-        .orElse(null);
+    // a lone vehicle's columns carry no name: the scenario must then be the one it was lowered from
+    Vehicle v = owner.isEmpty() ? (s.fleet() ? null : s.vehicles().get(0))
+        : s.vehicles().stream().filter(c -> c.name().equals(owner)).findFirst().orElse(null);
     if (v == null) {
       return Optional.empty();
     }

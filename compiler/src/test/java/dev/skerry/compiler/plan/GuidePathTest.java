@@ -140,7 +140,7 @@ class GuidePathTest {
     Scenario fleet = one.withVehiclesAndTargets(List.of(skiff, tug), List.of(one.target(),
         new dev.skerry.compiler.model.Target("quay", box(9.9, 7.9, 10.1, 8.1), true, null)));
     Milp first = FleetStarts.round(fleet, 1, null, null, java.util.Set.of(), true);
-    assertTrue(GuidePath.of(fleet, first).orElseThrow().passes("buoy"));
+    assertTrue(GuidePath.of(FleetStarts.withVehicles(fleet, List.of(skiff)), first).orElseThrow().passes("buoy"));
     Milp whole = Lowering.lower(fleet);
     List<dev.skerry.compiler.milp.Variable> vars = new java.util.ArrayList<>();
     for (dev.skerry.compiler.milp.Variable v : whole.variables()) {
@@ -151,5 +151,23 @@ class GuidePathTest {
     GuidePath g = GuidePath.of(fleet, skiffFree).orElseThrow();
     assertEquals("skiff", g.owner());
     assertFalse(g.passes("buoy"));
+  }
+
+  /**
+   * A round with one vehicle names none in its columns, so its guide must be read against the
+   * round's own scenario: the reverse order's first round (the fleet's second skiff alone) is guided
+   * from that skiff's start, and the whole fleet's scenario, where the lone columns could be either
+   * skiff's, gives no guide rather than the first skiff's (which once guided that round from the
+   * other skiff's start).
+   */
+  @Test
+  void aLoneLaterVehicleIsGuidedFromItsOwnStart() {
+    Scenario s = ExampleScenarios.tiny("twin_skiffs");
+    dev.skerry.compiler.model.Vehicle second = s.vehicles().get(1);
+    Milp alone = FleetStarts.round(s, List.of(second), null, null, java.util.Set.of(), true);
+    GuidePath g = GuidePath.of(FleetStarts.withVehicles(s, List.of(second)), alone).orElseThrow();
+    assertEquals(0, g.position(0).distanceTo(second.start()), 1e-9);
+    assertTrue(second.start().distanceTo(s.vehicles().get(0).start()) > 1, "the skiffs start apart");
+    assertTrue(GuidePath.of(s, alone).isEmpty());
   }
 }
