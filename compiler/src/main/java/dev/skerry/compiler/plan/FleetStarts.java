@@ -17,7 +17,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.function.Supplier;
+import java.util.function.Function;
 
 /**
  * A warm start for a fleet by planning its vehicles one after another (prioritised planning, common
@@ -64,13 +64,14 @@ public final class FleetStarts {
       // (as many vehicles may need), the reverse order's what they leave. Then each order's plan
       // goes through the cheap moves, and the cheapest through all of them. On the twin skiffs the
       // given order has the south skiff give way (59.71, which no move improves); the reverse the
-      // north one, whose rounds give 60.68, or now and then 61.9–62.1 in twice the time, and whose
-      // cheap moves reach the optimum, 59.63, in 1–6 s.
+      // north one, whose rounds give 61.94 and whose cheap moves reach the optimum, 59.63, in 4–7 s.
       Duration budget = Planner.scanBudget(options);
       List<List<Vehicle>> orders = new ArrayList<>(List.of(s.vehicles()));
-      List<Vehicle> reverse = new ArrayList<>(s.vehicles());
-      Collections.reverse(reverse);
-      orders.add(reverse);
+      if (s.fleet()) {
+        List<Vehicle> reverse = new ArrayList<>(s.vehicles());
+        Collections.reverse(reverse);
+        orders.add(reverse);
+      }
       List<double[]> planned = new ArrayList<>();
       int rounds = 0;
       List<String> reasons = new ArrayList<>();
@@ -143,9 +144,9 @@ public final class FleetStarts {
         sub = sub.withTimeLimit(perRound);
       }
       Vehicle next = order.get(i - 1);
-      // the scan's guide is the shortest way of the round's free vehicle, named in the round's scenario
-      // (alone in round 1, where the columns carry no vehicle's name: the reverse order's first
-      // round was guided from the first vehicle's start)
+      // the scan's guide is the shortest way of the round's free vehicle, read in the round's own
+      // scenario (alone in round 1 its columns carry no vehicle's name: read in the whole fleet's,
+      // the reverse order's first round was once guided from the first vehicle's start)
       Scenario planned = withVehicles(s, order.subList(0, i));
       Milp round = round(s, order.subList(0, i), previous, values, fixed, slow);
       // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
@@ -189,13 +190,14 @@ public final class FleetStarts {
    *   <li>the whole fleet solved again with every vehicle on the sides of the zones it keeps ({@link
    *       SoonerArrival#onItsSides}): a vehicle planned round another's fixed path gave way with a
    *       detour, which straightens once both may move (the twin skiffs planned south first: the
-   *       rounds' 60.67 to the optimum 59.63 in 1–2 s);
+   *       rounds' 61.94 to 61.54; a plan with the north skiff's detour behind the south one, 60.67,
+   *       to the optimum 59.63 in 1–2 s);
    *   <li>each vehicle on the sides of its shortest way round the zones, the fleet solved round it
    *       ({@link #onItsGuide});
    *   <li>each vehicle a step sooner with the whole fleet solved again round it, the latest first
    *       ({@link SoonerArrival#of}): the rounds make a later vehicle give way to an earlier one's
-   *       fixed path, and this move lets the earlier one bend aside (on the twin skiffs it took the
-   *       rounds' 61.83 to 59.64).
+   *       fixed path, and this move lets the earlier one bend aside (on the twin skiffs planned
+   *       south first it takes the north skiff from step 16 to 15, 61.54 to the optimum 59.63).
    * </ol>
    *
    * <p>The dear ones, which search longer:
@@ -213,14 +215,17 @@ public final class FleetStarts {
    * optimum has the north skiff a step later and the south one a step sooner than the plan in the
    * given order (north first, 59.71 most often), which is why {@link #find} plans the reverse order
    * too.
+   *
+   * <p>A move is not run again at a point where it ran before, unless it now has twice the time: it
+   * would find the same.
    */
   private static final class Moves {
     private final Scenario s;
     private final Milp model;
     private final SolverBackend backend;
     private final SolveOptions sub;
-    /** For each move, the point (by {@link #version}) at which it last ran. */
-    private final Map<String, Integer> ranAt = new HashMap<>();
+    /** For each move, when it last ran. */
+    private final Map<String, Ran> ranAt = new HashMap<>();
     private long deadline;
     private double[] x;
     /** How many times x has been improved. */
@@ -264,54 +269,61 @@ public final class FleetStarts {
     }
 
     private boolean cheapPass() {
-      boolean better = attempt("sides", () -> SoonerArrival.onItsSides(model, x, backend,
-          sub.withTimeLimit(left().multipliedBy(3).dividedBy(4))));
+      boolean better = attempt("sides", 3, 4,
+          cap -> SoonerArrival.onItsSides(model, x, backend, sub.withTimeLimit(cap)));
       for (Vehicle v : s.vehicles()) {
-        better |= attempt("guide " + v.name(), () -> onItsGuide(s, model, x, v, backend,
-            sub.withTimeLimit(left().dividedBy(4))));
+        better |= attempt("guide " + v.name(), 1, 4,
+            cap -> onItsGuide(s, model, x, v, backend, sub.withTimeLimit(cap)));
       }
       List<Vehicle> latestFirst = new ArrayList<>(s.vehicles());
       double[] at = x;
       latestFirst.sort((a, b) -> Integer.compare(SoonerArrival.arrivalStep(model, at, b.name()),
           SoonerArrival.arrivalStep(model, at, a.name())));
       for (Vehicle v : latestFirst) {
-        better |= attempt("sooner " + v.name(), () -> SoonerArrival.of(model, x, v.name(), backend,
-            sub.withTimeLimit(left().dividedBy(2))));
+        better |= attempt("sooner " + v.name(), 1, 2,
+            cap -> SoonerArrival.of(model, x, v.name(), backend, sub.withTimeLimit(cap)));
       }
       return better;
     }
 
     private boolean dearPass() {
       List<String> names = s.vehicles().stream().map(Vehicle::name).toList();
-      boolean better = attempt("polish", () -> SoonerArrival.polish(model, x, names, POLISH_WINDOW, backend,
-          sub.withTimeLimit(left().dividedBy(2))));
+      boolean better = attempt("polish", 1, 2,
+          cap -> SoonerArrival.polish(model, x, names, POLISH_WINDOW, backend, sub.withTimeLimit(cap)));
       for (Vehicle v : s.vehicles()) {
         if (!ArrivalScan.applies(heldRoundOthers(s, model, x, v))) {
           continue;
         }
-        better |= attempt("scan " + v.name(), () -> {
-          Duration left = left();
+        better |= attempt("scan " + v.name(), 1, 1, cap -> {
           WarmStarts.Start again = ArrivalScan.find(s, heldRoundOthers(s, model, x, v), backend,
-              sub.withTimeLimit(left), left.dividedBy(2));
+              sub.withTimeLimit(cap), cap.dividedBy(2));
           solves += again.rounds() - 1;
           return again.values();
         });
-        better |= attempt("polish " + v.name(), () -> ArrivalScan.polish(heldRoundOthers(s, model, x, v), x,
-            v.name(), POLISH_WINDOW, backend, sub.withTimeLimit(left().dividedBy(2))));
+        better |= attempt("polish " + v.name(), 1, 2, cap -> ArrivalScan.polish(heldRoundOthers(s, model, x, v),
+            x, v.name(), POLISH_WINDOW, backend, sub.withTimeLimit(cap)));
       }
       return better;
     }
 
+    /** When a move last ran: at which point (by {@link #version}) and with how much time. */
+    private record Ran(int version, Duration cap) {}
+
     /**
-     * Runs {@code move} from x unless the time is out or it ran from this very point before (a move
-     * that found nothing finds nothing again); takes its point if that lowers the objective.
+     * Runs {@code move} from x with {@code num/den} of the time left, unless the time is out or it
+     * ran from this very point before with at least half that time (a move that found nothing finds
+     * nothing again, unless it was cut short); takes its point if that lowers the objective.
      */
-    private boolean attempt(String move, Supplier<double[]> point) {
-      if (out() || Integer.valueOf(version).equals(ranAt.get(move))) {
+    private boolean attempt(String name, int num, int den, Function<Duration, double[]> move) {
+      Duration cap = left().multipliedBy(num).dividedBy(den);
+      Ran before = ranAt.get(name);
+      boolean triedHere = before != null && before.version() == version
+          && cap.compareTo(before.cap().multipliedBy(2)) < 0;
+      if (out() || triedHere) {
         return false;
       }
-      ranAt.put(move, version);
-      double[] y = point.get();
+      ranAt.put(name, new Ran(version, cap));
+      double[] y = move.apply(cap);
       solves++;
       if (y == null || !lowers(model, y, cost())) {
         return false;
@@ -335,11 +347,11 @@ public final class FleetStarts {
    * A point of {@code model} with vehicle {@code v} on the sides of its shortest way round the zones
    * ({@link GuidePath}, played to arrive at its step at x) and every other vehicle on the sides it
    * keeps at x, the fleet solved round it with every arrival held; null when the guide's sides are
-   * the ones v keeps already, or there is no guide or no point. The rounds plan each vehicle from a
-   * scan whose small solves stop at a 2 % gap, so a vehicle planned alone may take the longer way
-   * round a zone (the twin skiffs planned south first: now and then the south skiff north of the
-   * seal rock, 61.83; this move puts it south of the rock, 61.54, and the north skiff's step-sooner
-   * move then finds the optimum, 59.63).
+   * the ones v keeps already, or there is no guide or no point. A vehicle planned round another's
+   * fixed path, or by small solves that stop at a 2 % gap, may keep other sides than its shortest
+   * way's (the twin skiffs planned south first with the south skiff forced north of the seal rock,
+   * 61.83: this move puts it south of the rock, 61.54, and the north skiff's step-sooner move then
+   * finds the optimum, 59.63; {@code FleetMovesTest}).
    */
   static double[] onItsGuide(Scenario s, Milp model, double[] x, Vehicle v, SolverBackend backend,
       SolveOptions options) {

@@ -59,7 +59,8 @@ final class SoonerArrival {
    * where a pair comes near; solved from x. Nearly a plain LP: the whole fleet moves at once along
    * its own sides, so a vehicle that gave way in the rounds with a detour (planned round another's
    * fixed path) takes the straighter line the other leaves it once both may move. On the twin
-   * skiffs planned south first, from the rounds' 60.67 to the optimum 59.63 in 1–2 s with ojAlgo.
+   * skiffs, from a plan with the north skiff's detour behind the south one (60.67) to the optimum
+   * 59.63 in 1–2 s with ojAlgo.
    */
   static double[] onItsSides(Milp model, double[] x, SolverBackend backend, SolveOptions options) {
     return onSidesOf(model, x, x, backend, options);

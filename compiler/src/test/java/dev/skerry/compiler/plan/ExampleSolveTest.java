@@ -80,24 +80,20 @@ class ExampleSolveTest {
 
   /**
    * ojAlgo's time on the fleet: its rounds plan one skiff after the other, in the given order and
-   * in the reverse, each improved, in three quarters of the limit ({@link FleetStarts}). Measured
-   * with {@code skerry solve --time-limit 40}: SCIP's optimum in eight runs of eleven, 0.13 % above
-   * it in the other three (before the reverse order and the moves onto a skiff's own sides and
-   * shortest way: 0.13 % in three runs of four and 0.18 % in the fourth).
+   * in the reverse, then improve both plans, in three quarters of the limit ({@link FleetStarts}).
+   * Measured with {@code skerry solve --time-limit 40}: SCIP's optimum in eight runs of eight, the
+   * reverse order's moves reaching it 3–5 s before the start's time was out; 60 s here leaves room
+   * for a slower machine.
    */
-  static final Duration OJALGO_FLEET = Duration.ofSeconds(40);
+  static final Duration OJALGO_FLEET = Duration.ofSeconds(60);
 
   /**
-   * ojAlgo on every full example, 20 s each (the fleet 40 s): a plan the verifier accepts, within the plan's gap of
-   * SCIP's optimum of the same model (which {@code ExampleCrossCheckTest} checks against cbc 2.10 on
-   * our free MPS file and glpsol 5.0 on our LP file), except the twin skiffs. ojAlgo proves none of
-   * the 2-D ones in that time; its plans come from the arrival scan's start (the shortest path round
-   * the zones for its sides, {@link GuidePath}). The twin skiffs' plan has the default gap of 1e-6,
-   * and ojAlgo's plan there is most often SCIP's optimum, but now and then 0.13 % above it (59.707
-   * against 59.631, the given order's plan: the reverse order's rounds started worse, as when the
-   * south skiff's plan alone, from small solves that stop at a 2 % gap, takes the longer way round
-   * the seal rock, and its moves did not reach the optimum in the time): that one is checked within
-   * 1 %.
+   * ojAlgo on every full example, 20 s each (the fleet 60 s): a plan the verifier accepts, within
+   * the plan's gap of SCIP's optimum of the same model (which {@code ExampleCrossCheckTest} checks
+   * against cbc 2.10 on our free MPS file and glpsol 5.0 on our LP file). ojAlgo proves none of the
+   * 2-D ones in that time; its plans come from the arrival scan's start (the shortest path round the
+   * zones for its sides, {@link GuidePath}), the fleet's from planning the skiffs in turn and the
+   * moves after ({@link FleetStarts}). The twin skiffs' plan has the default gap of 1e-6.
    */
   @ParameterizedTest(name = "{0}")
   @MethodSource("names")
@@ -115,11 +111,7 @@ class ExampleSolveTest {
     double x = scip.solve().objective();
     double y = ojalgo.solve().objective();
     assertTrue(y >= x - 1e-6 * Math.abs(x) - 1e-6, () -> "ojAlgo " + y + " below SCIP's optimum " + x);
-    if (s.fleet()) {
-      assertTrue(y <= x * 1.01, () -> "ojAlgo " + y + ", SCIP " + x);
-    } else {
-      assertAgree(s, scip, ojalgo);
-    }
+    assertAgree(s, scip, ojalgo);
   }
 
   /**
