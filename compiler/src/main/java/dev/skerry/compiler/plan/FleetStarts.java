@@ -31,9 +31,10 @@ import java.util.function.Function;
  * round's unused time passing on to the next. A slow backend plans the reverse order too (the
  * order decides who gives way where two vehicles cross; an order whose earlier vehicles leave a
  * later one no way through may have a reverse that works): the given order's rounds may take the
- * whole budget, the reverse's what they leave. The time left then goes to moves that plan vehicles
- * again round the others ({@link Moves}): each order's plan through the cheap moves, the cheapest
- * plan after them through all the moves.
+ * whole budget, the reverse's what they leave, planned only when at least as much is left as the
+ * given order's took (or the given order failed). The time left then goes to moves that plan
+ * vehicles again round the others ({@link Moves}): each order's plan through the cheap moves, the
+ * cheapest plan after them through all the moves.
  * The last round's model is the full model with all but the last vehicle fixed: its solution is a
  * point of the full model, handed back only when the full model accepts it. An earlier vehicle's
  * fixed path may leave a later one no way through; when every order tried fails so, there is no
@@ -77,7 +78,10 @@ public final class FleetStarts {
       List<String> reasons = new ArrayList<>();
       for (List<Vehicle> order : orders) {
         Duration left = left(budget, t0);
-        if (left.isZero() || options.cancel().isCancelled()) {
+        // another order's rounds cost about what the first one's did: with less than that left they
+        // would take the time the first plan's moves need, and most likely fail
+        boolean room = planned.isEmpty() || left.compareTo(WarmStarts.since(t0)) >= 0;
+        if (left.isZero() || !room || options.cancel().isCancelled()) {
           break;
         }
         InTurn r = inTurn(s, model, order, backend, options, cap, left);
