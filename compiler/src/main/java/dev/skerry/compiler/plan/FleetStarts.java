@@ -152,7 +152,7 @@ public final class FleetStarts {
       // scenario (alone in round 1 its columns carry no vehicle's name: read in the whole fleet's,
       // the reverse order's first round was once guided from the first vehicle's start)
       Scenario planned = withVehicles(s, order.subList(0, i));
-      Milp round = round(s, order.subList(0, i), previous, values, fixed, slow);
+      Milp round = round(planned, previous, values, fixed, slow);
       // The zone-by-zone heuristic first (for a slow backend the arrival scan, which needs the
       // earlier vehicles' binaries fixed too so that one set of arrival binaries is left): with the
       // earlier vehicles fixed, its models hold one vehicle's nearby zones only; the round's whole
@@ -295,15 +295,16 @@ public final class FleetStarts {
       boolean better = attempt("polish", 1, 2,
           cap -> SoonerArrival.polish(model, x, names, POLISH_WINDOW, backend, sub.withTimeLimit(cap)));
       for (Vehicle v : s.vehicles()) {
-        if (!ArrivalScan.applies(heldRoundOthers(s, model, x, v))) {
+        Milp held = heldRoundOthers(s, model, x, v);
+        if (!ArrivalScan.applies(held)) {
           continue;
         }
         better |= attempt("scan " + v.name(), 1, 1, cap -> {
-          WarmStarts.Start again = ArrivalScan.find(s, heldRoundOthers(s, model, x, v), backend,
-              sub.withTimeLimit(cap), cap.dividedBy(2));
+          WarmStarts.Start again = ArrivalScan.find(s, held, backend, sub.withTimeLimit(cap), cap.dividedBy(2));
           solves += again.rounds() - 1;
           return again.values();
         });
+        // held again: the scan may have moved x
         better |= attempt("polish " + v.name(), 1, 2, cap -> ArrivalScan.polish(heldRoundOthers(s, model, x, v),
             x, v.name(), POLISH_WINDOW, backend, sub.withTimeLimit(cap)));
       }
@@ -482,7 +483,12 @@ public final class FleetStarts {
    */
   static Milp round(Scenario s, List<Vehicle> planned, Milp previous, double[] values, Set<String> fixed,
       boolean arrivals) {
-    Milp round = Lowering.lower(withVehicles(s, planned));
+    return round(withVehicles(s, planned), previous, values, fixed, arrivals);
+  }
+
+  /** As above, for the scenario of the round's vehicles ({@link #withVehicles}). */
+  private static Milp round(Scenario planned, Milp previous, double[] values, Set<String> fixed, boolean arrivals) {
+    Milp round = Lowering.lower(planned);
     return previous == null ? round : fix(round, previous, values, fixed, arrivals);
   }
 

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.skerry.compiler.lower.Lowering;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.Scenario;
@@ -12,7 +11,6 @@ import dev.skerry.compiler.model.Vehicle;
 import dev.skerry.compiler.solve.Backends;
 import dev.skerry.compiler.solve.SolveOptions;
 import dev.skerry.compiler.solve.SolveResult;
-import dev.skerry.compiler.solve.SolveStatus;
 import dev.skerry.compiler.solve.SolverBackend;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -29,7 +27,7 @@ import org.junit.jupiter.api.Test;
  * every run.
  */
 class FleetMovesTest {
-  private static final SolverBackend SCIP = Backends.standard().choose("scip", null).backend();
+  private static final SolverBackend SCIP = ScipOptimum.SCIP;
   private static final SolverBackend OJALGO = Backends.standard().choose("ojalgo", null).backend();
   private static final SolveOptions TEN_SECONDS = SolveOptions.defaults().withTimeLimit(Duration.ofSeconds(10));
 
@@ -39,11 +37,10 @@ class FleetMovesTest {
 
   @BeforeAll
   static void solve() {
-    s = ExampleScenarios.full("twin_skiffs");
-    model = Lowering.lower(s);
-    SolveResult r = SCIP.solve(model, SolveOptions.defaults());
-    assertEquals(SolveStatus.OPTIMAL, r.status(), r::summary);
-    optimum = r.values();
+    ScipOptimum o = ScipOptimum.of(ExampleScenarios.full("twin_skiffs"));
+    s = o.scenario();
+    model = o.model();
+    optimum = o.values();
   }
 
   /**

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.skerry.compiler.lower.Lowering;
 import dev.skerry.compiler.milp.Milp;
 import dev.skerry.compiler.milp.Variable;
 import dev.skerry.compiler.model.Scenario;
@@ -26,7 +25,7 @@ import org.junit.jupiter.api.Test;
  * glpsol in {@code ExampleCrossCheckTest}).
  */
 class SoonerArrivalTest {
-  private static final SolverBackend SCIP = Backends.standard().choose("scip", null).backend();
+  private static final SolverBackend SCIP = ScipOptimum.SCIP;
   private static final SolverBackend OJALGO = Backends.standard().choose("ojalgo", null).backend();
 
   private static Scenario s;
@@ -35,11 +34,10 @@ class SoonerArrivalTest {
 
   @BeforeAll
   static void solve() {
-    s = ExampleScenarios.tiny("twin_skiffs");
-    model = Lowering.lower(s);
-    SolveResult r = SCIP.solve(model, SolveOptions.defaults());
-    assertEquals(dev.skerry.compiler.solve.SolveStatus.OPTIMAL, r.status(), r::summary);
-    optimum = r.values();
+    ScipOptimum o = ScipOptimum.of(ExampleScenarios.tiny("twin_skiffs"));
+    s = o.scenario();
+    model = o.model();
+    optimum = o.values();
   }
 
   /**
